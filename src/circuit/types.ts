@@ -54,6 +54,8 @@ export interface ParsedValue {
   /** How the number was written, so a fix can write a new value the same way. */
   style?: "rkm" | "prefix" | "prefix-unit" | "plain";
   problem?: string;
+  /** Read, but with a doubt worth showing (e.g. `3,300uF`: decimal or thousands comma?). */
+  warning?: string;
 }
 
 /**
