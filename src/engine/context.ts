@@ -1,0 +1,447 @@
+// The Context: everything a rule may ask about one design, computed on first request and cached.
+// Rules never do circuit math; they ask here ("|Z| from this net to ground over the band", "the
+// operating point of Q3", "which stage is common-base"), and the figures come from src/solve.
+import type { Circuit, Part } from "../circuit/types.js";
+import type { Element, SolverCircuit } from "../solve/netlist.js";
+import type { Config } from "./config.js";
+import type { BandOfOperation, BiasThevenin, ComplexPoint, Rail, Stack, Stage } from "./context-types.js";
+import type { BaseReport, DeviceReport, RailReport } from "./result.js";
+import { surveyRails } from "./context-rails.js";
+import type { PartOnNet, SupplyPath, AcGroundTest } from "./context-topology.js";
+import {
+  ACTIVE_KINDS, classifyStage, dcNeighbourhood, findStacks, groundingCapacitors, indexCircuit, netOfRole,
+  pathToSupply, terminalsOf,
+} from "./context-topology.js";
+import type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
+import { buildSolver, capacitorModel, impedanceAt, solveDc, thermalVoltage, transferAt } from "./context-solver.js";
+
+export type { PartOnNet, SupplyPath } from "./context-topology.js";
+export type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
+
+/** A collector/drain load fed from a rail: the part, the device it feeds, and its size in ohms. */
+export interface RailLoad {
+  /** The load part nearest the device (collector resistor, choke). */
+  part: Part;
+  device: Part;
+  /** Resistance, or for a choke its reactance at the band's low edge (its smallest in the band). */
+  ohms: number;
+  /** The parts from the device to the rail, nearest first (load, then any decoupling). */
+  path: Part[];
+}
+
+/** A rule's record that it could not do its whole job, listed by `model-coverage`. */
+export interface Limitation {
+  rule: string;
+  reason: string;
+  parts: string[];
+}
+
+/** What the HTML report draws; rules add to it while they check. */
+export interface ReportCollector {
+  readonly rails: RailReport[];
+  readonly bases: BaseReport[];
+  addRail(rail: RailReport): void;
+  addBase(base: BaseReport): void;
+  /** The device operating-point table, from the operating point (empty when it could not be solved). */
+  devices(): DeviceReport[];
+}
+
+export interface ImpedanceOptions {
+  /** Leave the transistors out (their small-signal models) and see only the passive network. */
+  passiveOnly: boolean;
+  /** Elements added for a what-if ("with a 1 nF 0603 added here"), in solver node names. */
+  extra?: Element[];
+  /** Element names to leave out (what the network looks like without C7). */
+  without?: string[];
+}
+
+export interface Context {
+  readonly circuit: Circuit;
+  readonly config: Config;
+  /** The band of operation; `isDefault` when the user configured none (messages then say so). */
+  readonly band: BandOfOperation;
+  readonly report: ReportCollector;
+
+  /** Names of the ground nets. */
+  ground(): string[];
+  isGround(net: string): boolean;
+  /** Every supply rail with its volts (from the config, the net name, a battery, a source field). */
+  rails(): Rail[];
+  rail(net: string): Rail | undefined;
+  /** Power nets whose voltage nothing states (messages ask the user to set it in `rails`). */
+  unresolvedRails(): string[];
+  /** Ground or a rail: an AC ground by definition. */
+  isSupply(net: string): boolean;
+
+  /** The part with this reference (DNP parts included; check `dnp`). */
+  part(ref: string): Part | undefined;
+  /** Fitted parts on a net with the pin and its role. */
+  partsOn(net: string): PartOnNet[];
+  /** The net on a part's pin of this role ("B", "C", "1", "+"). */
+  netOf(ref: string, role: string): string | undefined;
+  /** The transistors (bipolar and FET), fitted, in reference order. */
+  devices(): Part[];
+
+  /** Each transistor's configuration, decided from the AC topology. */
+  stages(): Stage[];
+  stage(ref: string): Stage | undefined;
+  /** Series device chains from a rail toward ground (cascodes, totem poles), bottom first. */
+  stacks(): Stack[];
+  /** Capacitors from this net straight to ground or a rail (tank capacitors across an inductor excluded). */
+  groundingCapacitors(net: string): Part[];
+  /** How a net is fed from a rail through resistors/inductors (a collector's load and decoupling). */
+  supplyPath(net: string): SupplyPath | undefined;
+  /** The collector/drain loads whose DC feed passes through this rail. */
+  railLoads(rail: string): RailLoad[];
+  /** The DC network hanging on a net: nets and resistors/inductors reachable without crossing a supply. */
+  dcNetwork(net: string): { nets: string[]; parts: Part[] };
+
+  /** The Thevenin equivalent of the DC bias network a device's terminal sees, all transistors removed.
+   * `ohms` is Infinity when no DC path reaches a defined potential. Undefined without a solver. */
+  bias(ref: string, role: string): BiasThevenin | undefined;
+
+  /** The solver netlist with its notes, unmodelled parts and net→node map; undefined when it could not be built. */
+  solver(): SolverBuild | undefined;
+  /** Why `solver()` is undefined. */
+  solverProblem(): string | undefined;
+  /** The DC operating point; undefined when it could not be built or did not converge. */
+  operatingPoint(): OperatingPoint | undefined;
+  /** Why `operatingPoint()` is undefined. */
+  operatingPointProblem(): string | undefined;
+  /** A re-solve with some resistors changed (ref -> ohms); undefined when it did not converge. Cached per set. */
+  operatingPointWith(overrides: Record<string, number>): OperatingPoint | undefined;
+  /** A node's DC voltage from the operating point. */
+  voltage(net: string): number | undefined;
+  /** One device's operating point. */
+  device(ref: string): DeviceOperatingPoint | undefined;
+  /** A part's absolute maximum ratings from the model library or its fields. */
+  rating(ref: string): PartRatings | undefined;
+  /** Parts the solver could not model, with why. */
+  unmodelled(): Unmodelled[];
+
+  /** |Z| from a net to ground at the given frequencies. Off-board supplies count as open (the board's
+   * own bypass must hold the rail); an on-board battery counts with its internal resistance. */
+  impedance(net: string, frequencies: readonly number[], options: ImpedanceOptions): ComplexPoint[] | undefined;
+  /** Small-signal voltage transfer from one net to another at the operating point. */
+  transfer(input: string, output: string, frequencies: readonly number[]): ComplexPoint[] | undefined;
+  /** Log-spaced frequencies over the band and a decade beyond each edge, band edges included. */
+  frequencies(perDecade?: number): number[];
+  /** A capacitor's series R-L-C model (value, ESR, ESL from fields, package or defaults) and its SRF. */
+  capacitor(ref: string): CapacitorModel | undefined;
+  /** The solver node of a net (what `extra` elements connect to). */
+  nodeOf(net: string): string | undefined;
+  /** kT/q at the solver's temperature. */
+  thermalVoltage(): number;
+
+  /** Record that a rule could not do its whole job (shown by `model-coverage`). */
+  noteLimited(rule: string, reason: string, parts?: string[]): void;
+  limitations(): Limitation[];
+}
+
+/** Capacitors that tell configurations apart must be a signal short in the band: at most 100 Ω at
+ * the band's geometric centre (a tank or neutralising capacitor is far smaller). Our choice. */
+const TOPOLOGY_SHORT_OHMS = 100;
+
+function lazy<T>(compute: () => T): () => T {
+  let done = false;
+  let value: T;
+  return () => {
+    if (!done) {
+      value = compute();
+      done = true;
+    }
+    return value;
+  };
+}
+
+function naturalCompare(a: string, b: string): number {
+  return a.localeCompare(b, "en", { numeric: true });
+}
+
+export function createContext(circuit: Circuit, config: Config): Context {
+  const band: BandOfOperation = { low: config.band.low, high: config.band.high, isDefault: config.band.isDefault };
+  const index = indexCircuit(circuit);
+  const groundNets = new Set(circuit.nets.filter((n) => n.isGround).map((n) => n.name));
+  const railSurvey = lazy(() => surveyRails(circuit, config.rails));
+  const railByNet = lazy(() => new Map(railSurvey().rails.map((r) => [r.net, r])));
+  const isGround = (net: string): boolean => groundNets.has(net);
+  const isSupply = (net: string): boolean => groundNets.has(net) || railByNet().has(net);
+  const centre = Math.sqrt(band.low * band.high);
+  const acTest: AcGroundTest = {
+    isSupply,
+    isGround,
+    minimumFarads: 1 / (2 * Math.PI * centre * TOPOLOGY_SHORT_OHMS),
+  };
+
+  const devices = lazy(() =>
+    circuit.parts.filter((p) => !p.dnp && ACTIVE_KINDS.has(p.kind)).sort((a, b) => naturalCompare(a.ref, b.ref)));
+  const stages = lazy(() => devices().map((d) => classifyStage(d, index, acTest)).filter((s): s is Stage => s !== undefined));
+  const stacks = lazy(() => findStacks(devices(), index, acTest));
+
+  const railLoads = lazy(() => {
+    const byRail = new Map<string, RailLoad[]>();
+    for (const device of devices()) {
+      const terminals = terminalsOf(device.kind);
+      if (!terminals) continue;
+      // Only the terminal a load hangs on: a collector or drain (for p-type devices also their
+      // source/emitter side is at the rail, but that is not a load).
+      const net = netOfRole(device, terminals.output);
+      if (net === undefined || isSupply(net)) continue;
+      const path = pathToSupply(net, index, acTest);
+      const first = path?.parts[0];
+      if (!path || !first) continue;
+      const ohms = loadOhms(first, band.low);
+      if (ohms === undefined) continue;
+      // Every rail on the way up feeds this load: the local decoupled rail and the main rail above it.
+      const rails = new Set<string>([path.rail]);
+      let cursor = net;
+      for (const part of path.parts) {
+        const next = Object.values(part.pins).find((n) => n !== cursor);
+        if (next === undefined) break;
+        if (railByNet().has(next)) rails.add(next);
+        cursor = next;
+      }
+      for (const rail of rails) {
+        const list = byRail.get(rail) ?? [];
+        list.push({ part: first, device, ohms, path: path.parts });
+        byRail.set(rail, list);
+      }
+    }
+    return byRail;
+  });
+
+  const built = lazy(() => {
+    const railVolts: Record<string, number> = {};
+    for (const rail of railSurvey().rails) {
+      // A battery or source part sets its own rail in the netlist; only the others need a source.
+      if (rail.from === "config" || rail.from === "name") railVolts[rail.net] = rail.volts;
+    }
+    const modelsText = circuit.modelLibraries.map((m) => m.text).join("\n");
+    return buildSolver(circuit, railVolts, modelsText === "" ? undefined : modelsText);
+  });
+  const solverBuild = (): SolverBuild | undefined => {
+    const b = built();
+    return b.ok ? b.build : undefined;
+  };
+
+  const op = lazy((): { op?: OperatingPoint; problem?: string } => {
+    const build = solverBuild();
+    if (!build) return { problem: built().ok ? "no solver netlist" : (built() as { problem: string }).problem };
+    const result = solveDc(build.solver);
+    if (!result.converged) return { problem: result.problem ?? "the DC operating point did not converge" };
+    return { op: result };
+  });
+
+  const overrideCache = new Map<string, OperatingPoint | undefined>();
+  const limitations: Limitation[] = [];
+  const railReports: RailReport[] = [];
+  const baseReports: BaseReport[] = [];
+  const biasCache = new Map<string, BiasThevenin | undefined>();
+  const capacitorCache = new Map<string, CapacitorModel | undefined>();
+
+  /** The AC network for impedance questions: off-board rail sources removed (open), each node given a
+   * 1 GΩ leak so an isolated node cannot make the matrix singular (as the ngspice reference decks do). */
+  const acNetwork = lazy((): SolverCircuit | undefined => {
+    const build = solverBuild();
+    if (!build) return undefined;
+    const partRefs = new Set(circuit.parts.map((p) => p.ref));
+    const elements = build.solver.elements.filter((e) => e.kind !== "V" || partRefs.has(e.name));
+    const nodes = new Set<string>();
+    for (const e of elements) for (const n of elementNodes(e)) nodes.add(n);
+    nodes.delete("0");
+    const leaks: Element[] = [...nodes].map((n) => ({ kind: "R", name: `Rleak_${n}`, a: n, b: "0", ohms: 1e9 }));
+    return { title: build.solver.title, elements: [...elements, ...leaks] };
+  });
+
+  const ctx: Context = {
+    circuit,
+    config,
+    band,
+    report: {
+      rails: railReports,
+      bases: baseReports,
+      addRail: (rail) => railReports.push(rail),
+      addBase: (base) => baseReports.push(base),
+      devices: () => deviceTable(op().op),
+    },
+    ground: () => [...groundNets],
+    isGround,
+    rails: () => railSurvey().rails,
+    rail: (net) => railByNet().get(net),
+    unresolvedRails: () => railSurvey().unresolved,
+    isSupply,
+    part: (ref) => index.part(ref),
+    partsOn: (net) => index.partsOn(net),
+    netOf: (ref, role) => {
+      const part = index.part(ref);
+      return part ? netOfRole(part, role) : undefined;
+    },
+    devices,
+    stages,
+    stage: (ref) => stages().find((s) => s.ref === ref),
+    stacks,
+    groundingCapacitors: (net) => groundingCapacitors(net, index, acTest),
+    supplyPath: (net) => pathToSupply(net, index, acTest),
+    railLoads: (rail) => railLoads().get(rail) ?? [],
+    dcNetwork: (net) => dcNeighbourhood(net, index, isSupply),
+
+    bias(ref, role) {
+      const key = `${ref}:${role}`;
+      if (biasCache.has(key)) return biasCache.get(key);
+      const value = computeBias(ref, role);
+      biasCache.set(key, value);
+      return value;
+    },
+
+    solver: solverBuild,
+    solverProblem: () => {
+      const b = built();
+      return b.ok ? undefined : b.problem;
+    },
+    operatingPoint: () => op().op,
+    operatingPointProblem: () => op().problem,
+    operatingPointWith(overrides) {
+      const keys = Object.keys(overrides).sort(naturalCompare);
+      const key = keys.map((k) => `${k}=${overrides[k]}`).join(";");
+      if (overrideCache.has(key)) return overrideCache.get(key);
+      const build = solverBuild();
+      let result: OperatingPoint | undefined;
+      if (build) {
+        const elements = build.solver.elements.map((e): Element => {
+          const ohms = overrides[e.name];
+          return e.kind === "R" && ohms !== undefined ? { ...e, ohms } : e;
+        });
+        const solved = solveDc({ title: build.solver.title, elements });
+        result = solved.converged ? solved : undefined;
+      }
+      overrideCache.set(key, result);
+      return result;
+    },
+    voltage(net) {
+      const build = solverBuild();
+      const point = op().op;
+      if (!build || !point) return undefined;
+      if (groundNets.has(net)) return 0;
+      const node = build.nodeOfNet[net];
+      return node === undefined ? undefined : point.nodeVoltages[node];
+    },
+    device: (ref) => op().op?.devices[ref],
+    rating: (ref) => solverBuild()?.ratings[ref],
+    unmodelled: () => solverBuild()?.unmodelled ?? [],
+
+    impedance(net, frequencies, options) {
+      const base = options.passiveOnly ? acNetwork() : solverBuild()?.solver;
+      const node = ctx.nodeOf(net);
+      if (!base || node === undefined) return undefined;
+      const without = new Set(options.without ?? []);
+      const elements = [...base.elements.filter((e) => !without.has(e.name)), ...(options.extra ?? [])];
+      const network: SolverCircuit = { title: base.title, elements };
+      return impedanceAt(network, options.passiveOnly ? null : (op().op ?? null), node, [...frequencies], options.passiveOnly);
+    },
+    transfer(input, output, frequencies) {
+      const build = solverBuild();
+      const point = op().op;
+      const a = ctx.nodeOf(input);
+      const b = ctx.nodeOf(output);
+      if (!build || !point || a === undefined || b === undefined) return undefined;
+      return transferAt(build.solver, point, a, b, [...frequencies]);
+    },
+    frequencies: (perDecade = 40) => logGrid(band.low / 10, band.high * 10, perDecade, [band.low, band.high]),
+    capacitor(ref) {
+      if (capacitorCache.has(ref)) return capacitorCache.get(ref);
+      const part = index.part(ref);
+      const model = part ? capacitorModel(part) : undefined;
+      capacitorCache.set(ref, model);
+      return model;
+    },
+    nodeOf(net) {
+      if (groundNets.has(net)) return "0";
+      return solverBuild()?.nodeOfNet[net];
+    },
+    thermalVoltage,
+
+    noteLimited(rule, reason, parts = []) {
+      const same = limitations.find((l) => l.rule === rule && l.reason === reason);
+      if (same) {
+        for (const p of parts) if (!same.parts.includes(p)) same.parts.push(p);
+      } else limitations.push({ rule, reason, parts: [...parts] });
+    },
+    limitations: () => limitations,
+  };
+
+  /** Thevenin by two DC solves of the network with the transistors taken out: open-circuit voltage,
+   * then the voltage change for a small test current (exact for a resistive network). */
+  function computeBias(ref: string, role: string): BiasThevenin | undefined {
+    const part = index.part(ref);
+    const net = part ? netOfRole(part, role) : undefined;
+    if (!part || net === undefined) return undefined;
+    const neighbourhood = dcNeighbourhood(net, index, isSupply);
+    const partsInvolved = neighbourhood.parts.map((p) => p.ref).sort(naturalCompare);
+    if (groundNets.has(net)) return { volts: 0, ohms: 0, parts: [] };
+    const reachesSupply = neighbourhood.nets.some((n) => isSupply(n)) ||
+      neighbourhood.nets.some((n) => index.partsOn(n).some(({ part: p }) => p.kind === "battery" || p.kind === "voltage-source"));
+    if (!reachesSupply) return { volts: Number.NaN, ohms: Number.POSITIVE_INFINITY, parts: partsInvolved };
+    const build = solverBuild();
+    const node = build?.nodeOfNet[net];
+    if (!build || node === undefined) return undefined;
+    const elements = build.solver.elements.filter((e) => !isTransistorElement(e));
+    const open = solveDc({ title: build.solver.title, elements });
+    const testAmps = 1e-6;
+    const probe: Element = { kind: "I", name: "Iprobe_bias", pos: "0", neg: node, dc: testAmps };
+    const loaded = solveDc({ title: build.solver.title, elements: [...elements, probe] });
+    const v0 = open.nodeVoltages[node];
+    const v1 = loaded.nodeVoltages[node];
+    if (!open.converged || !loaded.converged || v0 === undefined || v1 === undefined) return undefined;
+    return { volts: v0, ohms: (v1 - v0) / testAmps, parts: partsInvolved };
+  }
+
+  return ctx;
+}
+
+/** Transistors are removed from a bias network; diodes stay (a diode string is part of the bias). */
+function isTransistorElement(e: Element): boolean {
+  return e.kind === "Q" || e.kind === "J" || e.kind === "M";
+}
+
+function elementNodes(e: Element): string[] {
+  switch (e.kind) {
+    case "R": case "C": case "L": return [e.a, e.b];
+    case "V": case "I": return [e.pos, e.neg];
+    case "D": return [e.anode, e.cathode];
+    case "Q": return [e.c, e.b, e.e];
+    case "J": return [e.d, e.g, e.s];
+    case "M": return [e.d, e.g, e.s, e.b];
+  }
+}
+
+/** A load's size: a resistor's ohms; a choke's reactance at the band's low edge. */
+function loadOhms(part: Part, lowHertz: number): number | undefined {
+  const value = part.parsed.number;
+  if (value === undefined || !(value > 0)) return undefined;
+  if (part.kind === "resistor") return value;
+  if (part.kind === "inductor") return 2 * Math.PI * lowHertz * value;
+  return undefined;
+}
+
+/** Log-spaced points from `from` to `to` inclusive, `perDecade` per decade, plus `include` points. */
+export function logGrid(from: number, to: number, perDecade: number, include: readonly number[] = []): number[] {
+  const decades = Math.log10(to / from);
+  const steps = Math.max(1, Math.ceil(decades * perDecade));
+  const points: number[] = [];
+  for (let i = 0; i <= steps; i++) points.push(from * 10 ** ((decades * i) / steps));
+  for (const f of include) if (f >= from && f <= to) points.push(f);
+  points.sort((a, b) => a - b);
+  // Drop near-duplicates (an included edge that falls on a grid point).
+  return points.filter((f, i) => i === 0 || f / (points[i - 1] ?? f) > 1 + 1e-9);
+}
+
+function deviceTable(point: OperatingPoint | undefined): DeviceReport[] {
+  if (!point) return [];
+  return Object.entries(point.devices)
+    .sort(([a], [b]) => naturalCompare(a, b))
+    .map(([ref, d]) => {
+      const figures: Record<string, number> = {};
+      for (const [k, v] of Object.entries(d)) if (typeof v === "number" && Number.isFinite(v)) figures[k] = v;
+      return { ref, type: d.type, region: d.region, figures };
+    });
+}
