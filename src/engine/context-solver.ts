@@ -7,39 +7,9 @@
 import type { Circuit, Part } from "../circuit/types.js";
 import type { SolverCircuit } from "../solve/netlist.js";
 import type { ComplexPoint } from "./context-types.js";
+import type { OperatingPoint } from "../solve/types.js";
 
-/** One device's DC operating point in practitioner signs (positive VCE/IC for a working npn and pnp). */
-export interface DeviceOperatingPoint {
-  type: string;
-  /** "active", "saturation", "cut-off", "reverse", "linear", … */
-  region: string;
-  vbe?: number;
-  vce?: number;
-  ic?: number;
-  ib?: number;
-  vgs?: number;
-  vds?: number;
-  id?: number;
-  power?: number;
-  gm?: number;
-  gpi?: number;
-  go?: number;
-  gds?: number;
-  cpi?: number;
-  cmu?: number;
-  cgs?: number;
-  cgd?: number;
-}
-
-export interface OperatingPoint {
-  converged: boolean;
-  /** Solver node name -> volts. */
-  nodeVoltages: Record<string, number>;
-  branchCurrents: Record<string, number>;
-  devices: Record<string, DeviceOperatingPoint>;
-  /** Why it failed, when it did. */
-  problem?: string;
-}
+export type { BjtOperatingPoint, DeviceOperatingPoint, DiodeOperatingPoint, JfetOperatingPoint, MosfetOperatingPoint, OperatingPoint } from "../solve/types.js";
 
 /** Absolute maximum ratings of a part, SI units; any may be absent. */
 export interface PartRatings {
@@ -89,11 +59,29 @@ export function buildSolver(_circuit: Circuit, _railVolts: Record<string, number
 }
 
 export function solveDc(_solver: SolverCircuit): OperatingPoint {
-  return { converged: false, nodeVoltages: {}, branchCurrents: {}, devices: {}, problem: NOT_YET };
+  return { converged: false, method: "newton", iterations: 0, nodeVoltages: {}, branchCurrents: {}, deliveredCurrents: {}, devices: {}, problem: NOT_YET };
 }
 
 export function impedanceAt(_solver: SolverCircuit, _op: OperatingPoint | null, _node: string, _freqs: number[], _passiveOnly: boolean): ComplexPoint[] | undefined {
   return undefined;
+}
+
+export function impedanceBetweenAt(_solver: SolverCircuit, _op: OperatingPoint | null, _a: string, _b: string, _freqs: number[], _passiveOnly: boolean): ComplexPoint[] | undefined {
+  return undefined;
+}
+
+// INTERIM until src/solve/eseries.ts lands: one decade of each series, IEC 60063 Table 1
+// (reference-data §1.1). E48 and finer fall back to E24 for now.
+const DECADES: Record<string, number[]> = {
+  E3: [1.0, 2.2, 4.7],
+  E6: [1.0, 1.5, 2.2, 3.3, 4.7, 6.8],
+  E12: [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2],
+  E24: [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1],
+};
+
+/** The mantissas of one decade of a series, ascending (1.0 … 9.1 for E24). */
+export function seriesDecade(series: string): number[] {
+  return DECADES[series] ?? DECADES.E24 ?? [];
 }
 
 export function transferAt(_solver: SolverCircuit, _op: OperatingPoint | null, _input: string, _output: string, _freqs: number[]): ComplexPoint[] | undefined {

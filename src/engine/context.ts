@@ -3,7 +3,7 @@
 // operating point of Q3", "which stage is common-base"), and the figures come from src/solve.
 import type { Circuit, Part } from "../circuit/types.js";
 import type { Element, SolverCircuit } from "../solve/netlist.js";
-import type { Config } from "./config.js";
+import type { Config, ESeriesName } from "./config.js";
 import type { BandOfOperation, BiasThevenin, ComplexPoint, Rail, Stack, Stage } from "./context-types.js";
 import type { BaseReport, DeviceReport, RailReport } from "./result.js";
 import { surveyRails } from "./context-rails.js";
@@ -13,7 +13,9 @@ import {
   pathToSupply, terminalsOf,
 } from "./context-topology.js";
 import type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
-import { buildSolver, capacitorModel, impedanceAt, solveDc, thermalVoltage, transferAt } from "./context-solver.js";
+import {
+  buildSolver, capacitorModel, impedanceAt, impedanceBetweenAt, seriesDecade, solveDc, thermalVoltage, transferAt,
+} from "./context-solver.js";
 
 export type { PartOnNet, SupplyPath } from "./context-topology.js";
 export type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
@@ -53,6 +55,8 @@ export interface ImpedanceOptions {
   extra?: Element[];
   /** Element names to leave out (what the network looks like without C7). */
   without?: string[];
+  /** Capacitor element names to treat as AC shorts (the short-circuit time-constant method). */
+  shorted?: string[];
 }
 
 export interface Context {
@@ -122,12 +126,23 @@ export interface Context {
   /** |Z| from a net to ground at the given frequencies. Off-board supplies count as open (the board's
    * own bypass must hold the rail); an on-board battery counts with its internal resistance. */
   impedance(net: string, frequencies: readonly number[], options: ImpedanceOptions): ComplexPoint[] | undefined;
+  /** The impedance between two nets (neither need be ground): what a series part across them works into. */
+  impedanceBetween(a: string, b: string, frequencies: readonly number[], options: ImpedanceOptions): ComplexPoint[] | undefined;
   /** Small-signal voltage transfer from one net to another at the operating point. */
   transfer(input: string, output: string, frequencies: readonly number[]): ComplexPoint[] | undefined;
   /** Log-spaced frequencies over the band and a decade beyond each edge, band edges included. */
   frequencies(perDecade?: number): number[];
   /** A capacitor's series R-L-C model (value, ESR, ESL from fields, package or defaults) and its SRF. */
   capacitor(ref: string): CapacitorModel | undefined;
+  /** The same part with another value: its model as the package and dielectric would give it
+   * (for "add a 1 nF 0603 like C12"). Without a part, a generic 0603 ceramic. */
+  capacitorLike(ref: string | undefined, farads: number): CapacitorModel | undefined;
+  /** IEC 60063 series values of a kind's configured series (or the one named) around a value. */
+  seriesValues(series: ESeriesName, from: number, to: number): number[];
+  /** The smallest member of the series at or above `value` (within rounding). */
+  snapUp(value: number, series: ESeriesName): number;
+  /** The member nearest `value` on a log scale. */
+  snapNearest(value: number, series: ESeriesName): number;
   /** The solver node of a net (what `extra` elements connect to). */
   nodeOf(net: string): string | undefined;
   /** kT/q at the solver's temperature. */
@@ -158,7 +173,12 @@ function naturalCompare(a: string, b: string): number {
   return a.localeCompare(b, "en", { numeric: true });
 }
 
-export function createContext(circuit: Circuit, config: Config): Context {
+export interface ContextExtras {
+  /** A SPICE model library from the config's `models` key, added to the design's own libraries. */
+  modelsText?: string;
+}
+
+export function createContext(circuit: Circuit, config: Config, extras: ContextExtras = {}): Context {
   const band: BandOfOperation = { low: config.band.low, high: config.band.high, isDefault: config.band.isDefault };
   const index = indexCircuit(circuit);
   const groundNets = new Set(circuit.nets.filter((n) => n.isGround).map((n) => n.name));
@@ -216,7 +236,7 @@ export function createContext(circuit: Circuit, config: Config): Context {
       // A battery or source part sets its own rail in the netlist; only the others need a source.
       if (rail.from === "config" || rail.from === "name") railVolts[rail.net] = rail.volts;
     }
-    const modelsText = circuit.modelLibraries.map((m) => m.text).join("\n");
+    const modelsText = [...circuit.modelLibraries.map((m) => m.text), ...(extras.modelsText ? [extras.modelsText] : [])].join("\n");
     return buildSolver(circuit, railVolts, modelsText === "" ? undefined : modelsText);
   });
   const solverBuild = (): SolverBuild | undefined => {
@@ -330,13 +350,21 @@ export function createContext(circuit: Circuit, config: Config): Context {
     unmodelled: () => solverBuild()?.unmodelled ?? [],
 
     impedance(net, frequencies, options) {
-      const base = options.passiveOnly ? acNetwork() : solverBuild()?.solver;
+      const network = whatIf(options, frequencies);
       const node = ctx.nodeOf(net);
-      if (!base || node === undefined) return undefined;
-      const without = new Set(options.without ?? []);
-      const elements = [...base.elements.filter((e) => !without.has(e.name)), ...(options.extra ?? [])];
-      const network: SolverCircuit = { title: base.title, elements };
-      return impedanceAt(network, options.passiveOnly ? null : (op().op ?? null), node, [...frequencies], options.passiveOnly);
+      if (!network || node === undefined) return undefined;
+      const point = options.passiveOnly ? null : op().op;
+      if (point === undefined) return undefined;
+      return impedanceAt(network, point, node, [...frequencies], options.passiveOnly);
+    },
+    impedanceBetween(a, b, frequencies, options) {
+      const network = whatIf(options, frequencies);
+      const nodeA = ctx.nodeOf(a);
+      const nodeB = ctx.nodeOf(b);
+      if (!network || nodeA === undefined || nodeB === undefined) return undefined;
+      const point = options.passiveOnly ? null : op().op;
+      if (point === undefined) return undefined;
+      return impedanceBetweenAt(network, point, nodeA, nodeB, [...frequencies], options.passiveOnly);
     },
     transfer(input, output, frequencies) {
       const build = solverBuild();
@@ -354,6 +382,28 @@ export function createContext(circuit: Circuit, config: Config): Context {
       capacitorCache.set(ref, model);
       return model;
     },
+    capacitorLike(ref, farads) {
+      const template = ref === undefined ? undefined : index.part(ref);
+      return capacitorModel(hypotheticalCapacitor(template, farads));
+    },
+    seriesValues: (series, from, to) => seriesBetween(series, from, to),
+    snapUp(value, series) {
+      const candidates = seriesBetween(series, value / 10, value * 10);
+      return candidates.find((v) => v >= value * (1 - 1e-9)) ?? value;
+    },
+    snapNearest(value, series) {
+      const candidates = seriesBetween(series, value / 10, value * 10);
+      let best = value;
+      let bestDistance = Number.POSITIVE_INFINITY;
+      for (const v of candidates) {
+        const d = Math.abs(Math.log(v / value));
+        if (d < bestDistance) {
+          best = v;
+          bestDistance = d;
+        }
+      }
+      return best;
+    },
     nodeOf(net) {
       if (groundNets.has(net)) return "0";
       return solverBuild()?.nodeOfNet[net];
@@ -368,6 +418,26 @@ export function createContext(circuit: Circuit, config: Config): Context {
     },
     limitations: () => limitations,
   };
+
+  /** The network for an impedance question, with the asked-for parts removed, shorted or added. */
+  function whatIf(options: ImpedanceOptions, frequencies: readonly number[]): SolverCircuit | undefined {
+    const base = options.passiveOnly ? acNetwork() : solverBuild()?.solver;
+    if (!base) return undefined;
+    const without = new Set(options.without ?? []);
+    const shorted = new Set(options.shorted ?? []);
+    const lowest = Math.min(...frequencies);
+    // 1 mΩ of reactance at the lowest frequency asked: a short for every practical purpose, while
+    // the DC solution (capacitors open) stays the one the operating point was found for.
+    const shortFarads = 1e3 / (2 * Math.PI * (Number.isFinite(lowest) && lowest > 0 ? lowest : 1));
+    const elements: Element[] = [];
+    for (const e of base.elements) {
+      if (without.has(e.name)) continue;
+      if (e.kind === "C" && shorted.has(e.name)) elements.push({ kind: "C", name: e.name, a: e.a, b: e.b, farads: shortFarads });
+      else elements.push(e);
+    }
+    elements.push(...(options.extra ?? []));
+    return { title: base.title, elements };
+  }
 
   /** Thevenin by two DC solves of the network with the transistors taken out: open-circuit voltage,
    * then the voltage change for a small test current (exact for a resistive network). */
@@ -423,6 +493,34 @@ function loadOhms(part: Part, lowHertz: number): number | undefined {
   return undefined;
 }
 
+/** A capacitor part like `template` (same footprint, fields, kind) but of another value. */
+function hypotheticalCapacitor(template: Part | undefined, farads: number): Part {
+  const base: Part = template ?? {
+    ref: "Cnew", value: "", kind: "capacitor", libId: "Device:C", footprint: "Capacitor_SMD:C_0603_1608Metric",
+    pins: {}, pinNames: {}, roles: { "1": "1", "2": "2" }, fields: {}, dnp: false, excludedFromSim: false,
+    parsed: { text: "" }, origin: { file: "", line: 0, column: 0, sheetPath: "/" },
+  };
+  const fields = { ...base.fields };
+  // Fields that pin the original part's own figures do not carry over to another value.
+  for (const key of Object.keys(fields)) if (/^(esr|esl|srf)$/i.test(key)) delete fields[key];
+  return { ...base, ref: "Cnew", value: "", fields, parsed: { ...base.parsed, text: "", number: farads } };
+}
+
+/** Every member of an IEC 60063 series between two values (inclusive), ascending. */
+function seriesBetween(series: ESeriesName, from: number, to: number): number[] {
+  const decade = seriesDecade(series);
+  const out: number[] = [];
+  const first = Math.floor(Math.log10(from)) - 1;
+  const last = Math.ceil(Math.log10(to)) + 1;
+  for (let exponent = first; exponent <= last; exponent++) {
+    for (const mantissa of decade) {
+      const v = Number((mantissa * 10 ** exponent).toPrecision(4));
+      if (v >= from * (1 - 1e-9) && v <= to * (1 + 1e-9)) out.push(v);
+    }
+  }
+  return out;
+}
+
 /** Log-spaced points from `from` to `to` inclusive, `perDecade` per decade, plus `include` points. */
 export function logGrid(from: number, to: number, perDecade: number, include: readonly number[] = []): number[] {
   const decades = Math.log10(to / from);
@@ -442,6 +540,6 @@ function deviceTable(point: OperatingPoint | undefined): DeviceReport[] {
     .map(([ref, d]) => {
       const figures: Record<string, number> = {};
       for (const [k, v] of Object.entries(d)) if (typeof v === "number" && Number.isFinite(v)) figures[k] = v;
-      return { ref, type: d.type, region: d.region, figures };
+      return { ref, type: d.kind === "diode" ? "diode" : d.type, region: d.region, figures };
     });
 }

@@ -50,4 +50,6 @@ export interface RuleDoc {
   fix: string;
   /** Published sources and common practice the rule rests on. */
   references: string[];
+  /** A short worked case: a board, the figure the rule computes, and the finding (or its absence). */
+  example?: string;
 }
