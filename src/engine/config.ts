@@ -177,7 +177,7 @@ function readQuantity(node: JsonNode, unit: "Hz" | "V", key: string, report: Rep
   }
   const parsed = parseQuantity(node.value, unit);
   if (typeof parsed === "number") return parsed;
-  report(node.pos, `${key}: '${node.value}' is not a ${UNIT_NOUN[unit]} (${parsed.error}); write it like ${UNIT_EXAMPLE[unit]}`);
+  report(node.pos, `${key}: '${node.value}' is not a ${UNIT_NOUN[unit]}; write it like ${UNIT_EXAMPLE[unit]}`);
   return undefined;
 }
 
@@ -367,24 +367,32 @@ export function editDistance(a: string, b: string): number {
   return at(a.length, b.length);
 }
 
-/** What findConfigFile needs from the file system (the reader's FileSource fits). */
+/** What the lookup needs from the file system: the reader's FileSource fits (a path exists when
+ * `realpath` resolves it). */
 export interface ConfigLookupFs {
-  exists(path: string): boolean;
-  isDirectory?(path: string): boolean;
+  realpath(path: string): string | { error: string };
+}
+
+function exists(fs: ConfigLookupFs, path: string): boolean {
+  return typeof fs.realpath(path) === "string";
 }
 
 /**
- * The config that applies to a design: `loadline.json` next to it, else in the nearest folder above,
- * stopping at the repository root (a folder holding `.git`) or the file-system root.
+ * The config that applies to a design file: `loadline.json` next to it, else in the nearest folder
+ * above, stopping at the repository root (a folder holding `.git`) or the file-system root.
  */
 export function findConfigFile(designPath: string, fs: ConfigLookupFs): string | undefined {
-  const start = resolve(designPath);
-  let dir = fs.isDirectory?.(start) ? start : dirname(start);
+  return findConfigFileFrom(dirname(resolve(designPath)), fs);
+}
+
+/** The same lookup starting in a folder. */
+export function findConfigFileFrom(folder: string, fs: ConfigLookupFs): string | undefined {
+  let dir = resolve(folder);
   // Bounded: a path has finitely many parents, and dirname of the root is the root.
   for (let depth = 0; depth < 256; depth++) {
     const candidate = join(dir, CONFIG_FILE_NAME);
-    if (fs.exists(candidate)) return candidate;
-    if (fs.exists(join(dir, ".git"))) return undefined;
+    if (exists(fs, candidate)) return candidate;
+    if (exists(fs, join(dir, ".git"))) return undefined;
     const parent = dirname(dir);
     if (parent === dir) return undefined;
     dir = parent;

@@ -115,13 +115,15 @@ export function normalizePath(path: string): string {
 /**
  * Whether `path` (relative, either slash) matches `glob`. `*` and `?` stay within a folder name,
  * `**` crosses folders, `[a-z]` is a class. As in .gitignore files, a glob with no "/" matches a name
- * at any depth, and a glob that matches a folder matches everything inside it.
+ * at any depth, and a glob that matches a folder matches everything inside it — unless `anchored`,
+ * which matches the whole path only (for paths given on a command line).
  */
-export function matchesGlob(path: string, glob: string): boolean {
+export function matchesGlob(path: string, glob: string, options: { anchored?: boolean } = {}): boolean {
   const target = normalizePath(path);
   let pattern = normalizePath(glob.trim());
   if (pattern === "") return false;
   if (pattern.endsWith("/")) pattern = pattern.slice(0, -1);
+  if (options.anchored) return matchTokens(tokenize(pattern), target);
   if (!pattern.includes("/")) pattern = `**/${pattern}`;
   if (pattern.startsWith("/")) pattern = pattern.slice(1);
   const tokens = tokenize(pattern);
@@ -131,4 +133,9 @@ export function matchesGlob(path: string, glob: string): boolean {
     if (matchTokens(tokens, target.slice(0, i))) return true;
   }
   return false;
+}
+
+/** Whether a path argument is a glob rather than a plain path. */
+export function isGlob(text: string): boolean {
+  return /[*?[]/.test(text);
 }

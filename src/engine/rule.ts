@@ -3,6 +3,7 @@
 // and the SARIF driver all read the same `doc` and `options`, so documentation cannot drift.
 import type { Finding, RuleDoc, RuleOption, Severity } from "./types.js";
 import { parseQuantity } from "../circuit/units.js";
+import type { QuantityUnit } from "../circuit/units.js";
 
 export interface Rule<Ctx = unknown> {
   /** Kebab-case, stable across releases: it appears in configs, suppressions and SARIF. */
@@ -21,7 +22,7 @@ export interface Rule<Ctx = unknown> {
 /** The parts of a rule that describe it, without the check: what reporters and docs need. */
 export type RuleInfo = Pick<Rule, "id" | "title" | "severity" | "doc" | "options" | "tags">;
 
-export type QuantityUnit = "Hz" | "Ω" | "V" | "A" | "F" | "H";
+export type { QuantityUnit };
 
 /** Unit spellings a rule author may write in `RuleOption.unit`, mapped to what parseQuantity takes. */
 const UNIT_ALIASES: Record<string, QuantityUnit> = {
@@ -60,7 +61,7 @@ export function checkRuleOption(option: RuleOption, value: unknown): OptionCheck
       if (typeof value === "string" && unit !== undefined) {
         const parsed = parseQuantity(value, unit);
         if (typeof parsed === "number") return { ok: true, value: parsed };
-        return { ok: false, expected: `${unitNoun(unit)} such as ${exampleOf(option)} (${parsed.error})` };
+        return { ok: false, expected: `${unitNoun(unit)} such as ${exampleOf(option)}` };
       }
       return { ok: false, expected: unit ? `${unitNoun(unit)} such as ${exampleOf(option)}` : "a number" };
     }
