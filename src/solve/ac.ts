@@ -1,0 +1,209 @@
+// Small-signal AC analysis: every device is linearised at the DC operating point (its
+// conductances plus jω times its junction, diffusion and overlap capacitances), one source or a
+// 1 A test current is driven, and the complex MNA system is solved at each frequency.
+
+import { solveOperatingPoint, solvedStateOf } from "./dc.js";
+import type { AcLoadContext } from "./device.js";
+import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
+import { ComplexSystem, GROUND, type Unknown } from "./mna.js";
+import type { SolverCircuit } from "./netlist.js";
+import { ComplexStamper } from "./stamp.js";
+import type { AcExcitation, AcResult, ComplexSeries, ImpedancePoint, OperatingPoint, TransferPoint } from "./types.js";
+
+export interface AcOptions {
+  /**
+   * Leave out every semiconductor, short voltage sources (keeping their series resistance) and
+   * open current sources: the passive network alone, as a supply-bypass check wants it. No
+   * operating point is needed.
+   */
+  passiveOnly?: boolean;
+}
+
+/** Tiny shunt on every node in the passive-only view, so nodes left by removed devices stay defined (1 TΩ). */
+const PASSIVE_SHUNT = 1e-12;
+
+function series(length: number): ComplexSeries {
+  return { re: new Float64Array(length).fill(NaN), im: new Float64Array(length).fill(NaN) };
+}
+
+function failedResult(frequencies: number[], problem: string): AcResult {
+  return { frequencies: [...frequencies], nodeVoltages: {}, branchCurrents: {}, problem };
+}
+
+/** The devices to linearise: the operating point's own when it belongs to this circuit. */
+function linearisationFor(circuit: SolverCircuit, op: OperatingPoint | null, passiveOnly: boolean): ElaboratedCircuit | string {
+  if (passiveOnly) return elaborate(circuit);
+  if (!op) return "an AC analysis with active devices needs a DC operating point";
+  if (!op.converged) return `no small-signal analysis without a DC operating point: ${op.problem ?? "it did not converge"}`;
+  const state = solvedStateOf(op);
+  if (state && state.elaborated.circuit === circuit) return state.elaborated;
+  // An operating point from elsewhere (another circuit object, or deserialised): solve again.
+  const again = solveOperatingPoint(circuit);
+  const fresh = solvedStateOf(again);
+  if (!again.converged || !fresh) return `no small-signal analysis without a DC operating point: ${again.problem ?? "it did not converge"}`;
+  return fresh.elaborated;
+}
+
+export function acSweep(
+  circuit: SolverCircuit,
+  op: OperatingPoint | null,
+  frequencies: number[],
+  excitation: AcExcitation,
+  opts: AcOptions = {},
+): AcResult {
+  const passiveOnly = opts.passiveOnly ?? false;
+  const bad = frequencies.find((f) => !(Number.isFinite(f) && f > 0));
+  if (bad !== undefined) return failedResult(frequencies, `AC frequencies must be positive finite numbers (got ${bad})`);
+  const lin = linearisationFor(circuit, op, passiveOnly);
+  if (typeof lin === "string") return failedResult(frequencies, lin);
+  const { unknowns, devices } = lin;
+
+  let injectAt: Unknown = GROUND;
+  let excitedSource: string | null = null;
+  if (excitation.kind === "source") {
+    const source = circuit.elements.find((el) => el.name === excitation.name);
+    if (!source || (source.kind !== "V" && source.kind !== "I")) {
+      return failedResult(frequencies, `there is no independent source named ${excitation.name} to drive`);
+    }
+    if (passiveOnly) return failedResult(frequencies, "the passive-only view has its sources removed; drive it with a test current instead");
+    excitedSource = excitation.name;
+  } else {
+    const node = unknowns.lookup(excitation.node);
+    if (node === undefined) return failedResult(frequencies, `there is no node named ${excitation.node}`);
+    if (node === GROUND) return failedResult(frequencies, "a test current into ground measures nothing; choose another node");
+    injectAt = node;
+  }
+
+  const n = unknowns.size;
+  const system = new ComplexSystem(n);
+  const stamp = new ComplexStamper(system);
+  const xr = new Float64Array(n), xi = new Float64Array(n);
+  const ctx: AcLoadContext = { omega: 0, excitedSource };
+  const named = unknowns.info.flatMap((info, i) => (info.kind === "node" ? [{ name: info.name, index: i }] : []));
+  const branches = devices.flatMap((d) => (d.branch !== undefined ? [{ name: d.name, index: d.branch }] : []));
+  const nodeVoltages: Record<string, ComplexSeries> = {};
+  const branchCurrents: Record<string, ComplexSeries> = {};
+  for (const { name } of named) nodeVoltages[name] = series(frequencies.length);
+  for (const { name } of branches) branchCurrents[name] = series(frequencies.length);
+  let problem: string | undefined;
+
+  frequencies.forEach((f, k) => {
+    ctx.omega = 2 * Math.PI * f;
+    system.begin();
+    for (const device of devices) {
+      if (passiveOnly && device.active) continue;
+      device.loadAc(stamp, ctx);
+    }
+    if (passiveOnly) {
+      unknowns.info.forEach((info, i) => {
+        if (info.kind !== "branch") system.add(i, i, PASSIVE_SHUNT, 0);
+      });
+    }
+    if (injectAt !== GROUND) system.addRhs(injectAt, 1, 0);
+    const solved = system.solve(xr, xi);
+    if (!solved.ok) {
+      problem ??= `the small-signal matrix is singular at ${unknowns.describe(solved.singularUnknown)} (${f} Hz)`;
+      return;
+    }
+    for (const { name, index } of named) {
+      const s = nodeVoltages[name];
+      if (s) { s.re[k] = xr[index] as number; s.im[k] = xi[index] as number; }
+    }
+    for (const { name, index } of branches) {
+      const s = branchCurrents[name];
+      if (s) { s.re[k] = xr[index] as number; s.im[k] = xi[index] as number; }
+    }
+  });
+
+  const result: AcResult = { frequencies: [...frequencies], nodeVoltages, branchCurrents };
+  if (problem !== undefined) result.problem = problem;
+  return result;
+}
+
+function phaseDeg(re: number, im: number): number {
+  return (Math.atan2(im, re) * 180) / Math.PI;
+}
+
+function nanSeries(length: number): ComplexSeries {
+  return series(length);
+}
+
+/**
+ * Impedance from `node` to ground: 1 A is injected and the node voltage read. With
+ * `passiveOnly` the active devices and sources are taken out (see AcOptions) and `op` may be null.
+ * Points are NaN where the network could not be solved.
+ */
+export function impedanceToGround(
+  circuit: SolverCircuit,
+  op: OperatingPoint | null,
+  node: string,
+  frequencies: number[],
+  opts: AcOptions = {},
+): ImpedancePoint[] {
+  const ac = acSweep(circuit, op, frequencies, { kind: "current", node }, opts);
+  const v = ac.nodeVoltages[node] ?? nanSeries(frequencies.length);
+  return frequencies.map((f, k) => {
+    const re = v.re[k] as number, im = v.im[k] as number;
+    return { f, mag: Math.hypot(re, im), phaseDeg: phaseDeg(re, im), re, im };
+  });
+}
+
+/** Voltage at `outNode` per unit drive of source `sourceName` (V/V for a voltage source, Ω for a current source). */
+export function transfer(
+  circuit: SolverCircuit,
+  op: OperatingPoint | null,
+  sourceName: string,
+  outNode: string,
+  frequencies: number[],
+): TransferPoint[] {
+  const ac = acSweep(circuit, op, frequencies, { kind: "source", name: sourceName });
+  const v = outNode === "0" ? { re: new Float64Array(frequencies.length), im: new Float64Array(frequencies.length) } : (ac.nodeVoltages[outNode] ?? nanSeries(frequencies.length));
+  return frequencies.map((f, k) => {
+    const re = v.re[k] as number, im = v.im[k] as number;
+    return { f, gainDb: 20 * Math.log10(Math.hypot(re, im)), phaseDeg: phaseDeg(re, im), re, im };
+  });
+}
+
+/**
+ * Logarithmically spaced frequencies from f1 to f2, `pointsPerDecade` per decade, starting at f1;
+ * f2 is appended when the grid does not land on it.
+ */
+export function logSpace(f1: number, f2: number, pointsPerDecade: number): number[] {
+  if (!(f1 > 0 && f2 >= f1 && pointsPerDecade > 0)) return [];
+  const steps = Math.floor(Math.log10(f2 / f1) * pointsPerDecade + 1e-9);
+  const out: number[] = [];
+  for (let k = 0; k <= steps; k++) out.push(f1 * Math.pow(10, k / pointsPerDecade));
+  const last = out[out.length - 1] ?? f1;
+  if (last < f2 * (1 - 1e-9)) out.push(f2);
+  return out;
+}
+
+/**
+ * Frequency where the gain has fallen `dropDb` below its maximum: "upper" searches above the
+ * peak, "lower" below it. Interpolates linearly in dB against log-frequency between the two
+ * grid points that straddle the level; null when the curve never falls that far.
+ */
+export function findCorner(
+  curve: ReadonlyArray<{ f: number; gainDb: number }>,
+  dropDb = 3,
+  direction: "upper" | "lower" = "upper",
+): number | null {
+  let peak = -1;
+  let peakDb = -Infinity;
+  curve.forEach((p, i) => {
+    if (p.gainDb > peakDb) { peakDb = p.gainDb; peak = i; }
+  });
+  if (peak < 0) return null;
+  const level = peakDb - dropDb;
+  const step = direction === "upper" ? 1 : -1;
+  for (let i = peak + step; i >= 0 && i < curve.length; i += step) {
+    const here = curve[i], prev = curve[i - step];
+    if (!here || !prev) break;
+    if (here.gainDb <= level) {
+      const t = (prev.gainDb - level) / (prev.gainDb - here.gainDb);
+      const lf = Math.log10(prev.f) + t * (Math.log10(here.f) - Math.log10(prev.f));
+      return Math.pow(10, lf);
+    }
+  }
+  return null;
+}

@@ -1,0 +1,323 @@
+// DC operating point: Newton–Raphson over the devices' companion stamps, with the convergence
+// test of Berkeley SPICE (RELTOL 1e-3, VNTOL 1 µV, ABSTOL 1 pA) and its two continuation
+// fall-backs — gmin stepping (a shunt conductance on every node, shrunk decade by decade) and
+// source stepping (supplies ramped up from zero). Every loop is bounded by an iteration cap and
+// a wall-clock deadline, so a hopeless circuit returns a reason instead of hanging.
+
+import type { DcLoadContext, DcMode } from "./device.js";
+import { diagnoseTopology } from "./diagnose.js";
+import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
+import { RealSystem, type Unknown } from "./mna.js";
+import type { SolverCircuit } from "./netlist.js";
+import { RealStamper } from "./stamp.js";
+import type { DeviceOperatingPoint, OperatingPoint, SolveMethod } from "./types.js";
+
+export interface DcOptions {
+  /** Total Newton iterations allowed across all strategies (default 3000). */
+  maxIterations?: number;
+  /** Wall-clock budget in milliseconds (default 10 000). */
+  maxMillis?: number;
+  /** Junction shunt conductance, SPICE's GMIN (default 1e-12 S). */
+  gmin?: number;
+}
+
+const RELTOL = 1e-3;
+const VNTOL = 1e-6;
+const ABSTOL = 1e-12;
+/** Iterations for the first, plain attempt (SPICE's ITL1). */
+const PLAIN_NEWTON_LIMIT = 100;
+/** Iterations per continuation step. */
+const STEP_NEWTON_LIMIT = 60;
+const MAX_CONTINUATION_STEPS = 200;
+const DEFAULT_MAX_ITERATIONS = 3000;
+const DEFAULT_MAX_MILLIS = 10_000;
+const DEFAULT_GMIN = 1e-12;
+
+/** Why a Newton run stopped without converging. */
+type NewtonFailure =
+  | { reason: "iterations"; worstUnknown: Unknown; worstStep: number }
+  | { reason: "singular"; unknown: Unknown }
+  | { reason: "not-finite" }
+  | { reason: "iteration-cap" }
+  | { reason: "deadline" };
+
+type NewtonOutcome = { ok: true; iterations: number } | ({ ok: false; iterations: number } & NewtonFailure);
+
+interface NewtonRun {
+  diagGmin: number;
+  srcFactor: number;
+  limit: number;
+  /** How the first iteration evaluates devices. */
+  firstMode: DcMode;
+}
+
+/** Solver state for one circuit: the devices, the matrix and the current iterate. */
+class DcSolver {
+  readonly system: RealSystem;
+  readonly stamp: RealStamper;
+  x: Float64Array;
+  private xNew: Float64Array;
+  totalIterations = 0;
+  readonly ctx: DcLoadContext;
+
+  constructor(
+    readonly elaborated: ElaboratedCircuit,
+    readonly gmin: number,
+    readonly maxIterations: number,
+    readonly deadline: number,
+  ) {
+    const n = elaborated.unknowns.size;
+    this.system = new RealSystem(n);
+    this.stamp = new RealStamper(this.system);
+    this.x = new Float64Array(n);
+    this.xNew = new Float64Array(n);
+    this.ctx = { mode: "normal", gmin, srcFactor: 1, limited: false };
+  }
+
+  private load(x: Float64Array, mode: DcMode, srcFactor: number, diagGmin: number): void {
+    const ctx = this.ctx;
+    ctx.mode = mode;
+    ctx.srcFactor = srcFactor;
+    ctx.limited = false;
+    this.system.begin();
+    for (const device of this.elaborated.devices) device.loadDc(x, this.stamp, ctx);
+    if (diagGmin > 0) {
+      const info = this.elaborated.unknowns.info;
+      for (let i = 0; i < info.length; i++) if (info[i]?.kind !== "branch") this.system.add(i, i, diagGmin);
+    }
+  }
+
+  newton(run: NewtonRun): NewtonOutcome {
+    const info = this.elaborated.unknowns.info;
+    for (let iter = 0; iter < run.limit; iter++) {
+      if (this.totalIterations >= this.maxIterations) return { ok: false, iterations: iter, reason: "iteration-cap" };
+      if (Date.now() > this.deadline) return { ok: false, iterations: iter, reason: "deadline" };
+      this.totalIterations++;
+      this.load(this.x, iter === 0 ? run.firstMode : "normal", run.srcFactor, run.diagGmin);
+      const limited = this.ctx.limited;
+      const solved = this.system.solve(this.xNew);
+      if (!solved.ok) return { ok: false, iterations: iter + 1, reason: "singular", unknown: solved.singularUnknown };
+      let worstUnknown = -1, worstRatio = 0, worstStep = 0, finite = true;
+      for (let i = 0; i < info.length; i++) {
+        const xn = this.xNew[i] as number, xo = this.x[i] as number;
+        if (!Number.isFinite(xn)) { finite = false; break; }
+        const tol = RELTOL * Math.max(Math.abs(xn), Math.abs(xo)) + (info[i]?.kind === "branch" ? ABSTOL : VNTOL);
+        const ratio = Math.abs(xn - xo) / tol;
+        if (ratio > worstRatio) { worstRatio = ratio; worstUnknown = i; worstStep = xn - xo; }
+      }
+      if (!finite) return { ok: false, iterations: iter + 1, reason: "not-finite" };
+      [this.x, this.xNew] = [this.xNew, this.x];
+      const first = iter === 0 && run.firstMode === "init-junction";
+      if (!first && !limited && worstRatio <= 1) return { ok: true, iterations: iter + 1 };
+      if (iter === run.limit - 1) return { ok: false, iterations: iter + 1, reason: "iterations", worstUnknown, worstStep };
+    }
+    return { ok: false, iterations: run.limit, reason: "iterations", worstUnknown: -1, worstStep: 0 };
+  }
+
+  /** Evaluates every device exactly at the accepted solution so reports match the node voltages. */
+  finalEvaluation(srcFactor: number): void {
+    this.load(this.x, "no-limit", srcFactor, 0);
+  }
+
+  get remaining(): number { return Math.max(0, this.maxIterations - this.totalIterations); }
+}
+
+interface StrategyResult {
+  ok: boolean;
+  /** Last failure, for the explanation. */
+  failure?: NewtonFailure;
+  /** How far a continuation got, for the explanation. */
+  progress?: string;
+}
+
+function isHardStop(f: NewtonFailure | undefined): boolean {
+  return f !== undefined && (f.reason === "iteration-cap" || f.reason === "deadline" || f.reason === "singular");
+}
+
+function plainNewton(solver: DcSolver): StrategyResult {
+  solver.x.fill(0);
+  const r = solver.newton({ diagGmin: 0, srcFactor: 1, limit: PLAIN_NEWTON_LIMIT, firstMode: "init-junction" });
+  return r.ok ? { ok: true } : { ok: false, failure: r };
+}
+
+/** Shunts every node to ground with a conductance that starts large and is relaxed step by step. */
+function gminStepping(solver: DcSolver): StrategyResult {
+  solver.x.fill(0);
+  let diag = 1e-2;
+  let factor = 10;
+  let lastGood = -1;
+  let saved: Float64Array | null = null;
+  let failure: NewtonFailure | undefined;
+  for (let step = 0; step < MAX_CONTINUATION_STEPS; step++) {
+    const r = solver.newton({
+      diagGmin: diag,
+      srcFactor: 1,
+      limit: STEP_NEWTON_LIMIT,
+      firstMode: saved ? "no-limit" : "init-junction",
+    });
+    if (r.ok) {
+      saved = solver.x.slice();
+      lastGood = diag;
+      if (diag <= solver.gmin) break;
+      if (r.iterations <= STEP_NEWTON_LIMIT / 4) factor = Math.min(factor * Math.sqrt(factor), 10);
+      diag = Math.max(diag / factor, solver.gmin);
+      continue;
+    }
+    failure = r;
+    if (!saved || isHardStop(r)) {
+      return { ok: false, failure: r, progress: saved ? `stalled at a node shunt of ${lastGood.toExponential(1)} S` : "failed even with 10 mS on every node" };
+    }
+    factor = Math.sqrt(Math.sqrt(factor));
+    if (factor < 1.00005) return { ok: false, failure: r, progress: `stalled at a node shunt of ${lastGood.toExponential(1)} S` };
+    solver.x.set(saved);
+    diag = lastGood / factor;
+  }
+  if (!saved || lastGood > solver.gmin) return { ok: false, failure, progress: `stopped at a node shunt of ${lastGood.toExponential(1)} S` };
+  const r = solver.newton({ diagGmin: 0, srcFactor: 1, limit: STEP_NEWTON_LIMIT, firstMode: "no-limit" });
+  return r.ok ? { ok: true } : { ok: false, failure: r, progress: "converged with shunts but not after removing the last one" };
+}
+
+/** Ramps every independent source from zero to its full value. */
+function sourceStepping(solver: DcSolver): StrategyResult {
+  solver.x.fill(0);
+  const start = solver.newton({ diagGmin: 0, srcFactor: 0, limit: STEP_NEWTON_LIMIT, firstMode: "init-junction" });
+  if (!start.ok) return { ok: false, failure: start, progress: "failed with every source at zero" };
+  let reached = 0;
+  let raise = 1e-3;
+  let saved = solver.x.slice();
+  for (let step = 0; step < MAX_CONTINUATION_STEPS * 5; step++) {
+    const target = Math.min(1, reached + raise);
+    const r = solver.newton({ diagGmin: 0, srcFactor: target, limit: STEP_NEWTON_LIMIT, firstMode: "no-limit" });
+    if (r.ok) {
+      reached = target;
+      saved = solver.x.slice();
+      if (reached >= 1) return { ok: true };
+      if (r.iterations <= STEP_NEWTON_LIMIT / 4) raise *= 1.5;
+      continue;
+    }
+    if (isHardStop(r)) return { ok: false, failure: r, progress: `reached ${(reached * 100).toFixed(1)} % of the supplies` };
+    raise /= 10;
+    solver.x.set(saved);
+    if (raise < 1e-7) return { ok: false, failure: r, progress: `reached ${(reached * 100).toFixed(1)} % of the supplies` };
+  }
+  return { ok: false, progress: `reached ${(reached * 100).toFixed(1)} % of the supplies` };
+}
+
+function describeFailure(solver: DcSolver, failure: NewtonFailure | undefined): string {
+  const unknowns = solver.elaborated.unknowns;
+  if (!failure) return "";
+  switch (failure.reason) {
+    case "iteration-cap": return `stopped at the cap of ${solver.maxIterations} Newton iterations`;
+    case "deadline": return "stopped at the time limit";
+    case "not-finite": return "the iterate overflowed (a device was driven to an absurd voltage)";
+    case "singular": return `the matrix became singular at ${unknowns.describe(failure.unknown)}`;
+    case "iterations":
+      if (failure.worstUnknown < 0) return "Newton's method did not settle";
+      return `Newton's method did not settle; the largest change was still ${formatStep(failure.worstStep, unknowns.info[failure.worstUnknown]?.kind === "branch")} at ${unknowns.describe(failure.worstUnknown)}`;
+  }
+}
+
+function formatStep(value: number, isCurrent: boolean): string {
+  const unit = isCurrent ? "A" : "V";
+  return `${value.toPrecision(3)} ${unit}`;
+}
+
+function singularMessage(solver: DcSolver, unknown: Unknown): string {
+  const info = solver.elaborated.unknowns.info[unknown];
+  if (info?.kind === "branch") {
+    return `the current through ${info.name} is not fixed by the circuit (the matrix is singular there); check for a loop of voltage sources or inductors, or a source with nothing across it`;
+  }
+  const where = info?.kind === "internal-node" ? `internal node ${info.name}` : `node ${info?.name ?? unknown}`;
+  return `the DC voltage of ${where} is not fixed by the circuit (the matrix is singular there); give it a DC path to ground`;
+}
+
+/** Solved state kept for the AC analysis, keyed by the result object handed to callers. */
+export interface SolvedState {
+  elaborated: ElaboratedCircuit;
+  x: Float64Array;
+}
+
+const solvedStates = new WeakMap<OperatingPoint, SolvedState>();
+
+export function solvedStateOf(op: OperatingPoint): SolvedState | undefined {
+  return solvedStates.get(op);
+}
+
+function emptyResult(problem: string): OperatingPoint {
+  return {
+    converged: false,
+    method: "newton",
+    iterations: 0,
+    nodeVoltages: {},
+    branchCurrents: {},
+    deliveredCurrents: {},
+    devices: {},
+    problem,
+  };
+}
+
+function collectResult(solver: DcSolver, converged: boolean, method: SolveMethod, problem?: string): OperatingPoint {
+  const { unknowns, devices } = solver.elaborated;
+  const x = solver.x;
+  if (!x.every(Number.isFinite)) x.fill(0);
+  solver.finalEvaluation(1);
+  const nodeVoltages: Record<string, number> = {};
+  unknowns.info.forEach((info, i) => {
+    if (info.kind === "node") nodeVoltages[info.name] = x[i] as number;
+  });
+  const branchCurrents: Record<string, number> = {};
+  const deliveredCurrents: Record<string, number> = {};
+  const deviceReports: Record<string, DeviceOperatingPoint> = {};
+  for (const device of devices) {
+    if (device.branch !== undefined) branchCurrents[device.name] = x[device.branch] as number;
+    if (device.delivered) deliveredCurrents[device.name] = device.delivered(x, 1);
+    if (device.report) deviceReports[device.name] = device.report(x);
+  }
+  const result: OperatingPoint = {
+    converged,
+    method,
+    iterations: solver.totalIterations,
+    nodeVoltages,
+    branchCurrents,
+    deliveredCurrents,
+    devices: deviceReports,
+  };
+  if (problem !== undefined) result.problem = problem;
+  solvedStates.set(result, { elaborated: solver.elaborated, x: x.slice() });
+  return result;
+}
+
+/**
+ * Finds the DC operating point. Never throws for a bad circuit and never runs past its caps:
+ * `converged: false` comes with a `problem` saying why, in the trade's words.
+ */
+export function solveOperatingPoint(circuit: SolverCircuit, opts: DcOptions = {}): OperatingPoint {
+  const topology = diagnoseTopology(circuit);
+  if (topology.length > 0) return emptyResult(topology.map((p) => p.message).join("; "));
+
+  const maxIterations = Math.max(1, Math.floor(opts.maxIterations ?? DEFAULT_MAX_ITERATIONS));
+  const maxMillis = Math.max(0, opts.maxMillis ?? DEFAULT_MAX_MILLIS);
+  const gmin = opts.gmin ?? DEFAULT_GMIN;
+  const solver = new DcSolver(elaborate(circuit), gmin, maxIterations, Date.now() + maxMillis);
+
+  const plain = plainNewton(solver);
+  if (plain.ok) return collectResult(solver, true, "newton");
+  if (plain.failure?.reason === "singular") {
+    return collectResult(solver, false, "newton", singularMessage(solver, plain.failure.unknown));
+  }
+  const attempts: string[] = [`plain Newton: ${describeFailure(solver, plain.failure)}`];
+  if (!isHardStop(plain.failure)) {
+    const gminRun = gminStepping(solver);
+    if (gminRun.ok) return collectResult(solver, true, "gmin-stepping");
+    attempts.push(`gmin stepping: ${gminRun.progress ?? ""}${gminRun.failure ? ` (${describeFailure(solver, gminRun.failure)})` : ""}`);
+    if (!isHardStop(gminRun.failure)) {
+      const sourceRun = sourceStepping(solver);
+      if (sourceRun.ok) return collectResult(solver, true, "source-stepping");
+      attempts.push(`source stepping: ${sourceRun.progress ?? ""}${sourceRun.failure ? ` (${describeFailure(solver, sourceRun.failure)})` : ""}`);
+    }
+  }
+  const problem =
+    `no DC operating point found after ${solver.totalIterations} iterations — ${attempts.join("; ")}. ` +
+    "Look for a stage without a bias path, positive feedback around a DC loop, or model parameters far outside their usual range.";
+  return collectResult(solver, false, "newton", problem);
+}

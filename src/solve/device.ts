@@ -1,0 +1,50 @@
+// What the Newton engine and the AC sweep know about an element: it can load its DC companion
+// stamps at a trial solution, load its small-signal admittances at the operating point, and
+// describe its operating point. Nothing here knows what a transistor is.
+
+import type { UnknownMap } from "./mna.js";
+import type { ComplexStamp, RealStamp, Unknown } from "./stamp.js";
+import type { DeviceOperatingPoint } from "./types.js";
+
+/**
+ * init-junction: first iteration from scratch; semiconductors use SPICE's initial junction
+ *   voltages instead of the (all-zero) trial solution.
+ * normal: evaluate at the trial solution with junction limiting.
+ * no-limit: evaluate exactly at the trial solution (final evaluation, restarts from a saved point).
+ */
+export type DcMode = "init-junction" | "normal" | "no-limit";
+
+export interface DcLoadContext {
+  mode: DcMode;
+  /** Conductance SPICE places across every pn junction (siemens). */
+  gmin: number;
+  /** Scale of every independent source (source stepping), 1 normally. */
+  srcFactor: number;
+  /** Set by a model when it limited a step in this load: the iterate cannot be final. */
+  limited: boolean;
+}
+
+export interface AcLoadContext {
+  omega: number;
+  /** Name of the one independent source driven with unit amplitude, or null. */
+  excitedSource: string | null;
+}
+
+export interface Device {
+  readonly name: string;
+  /** Semiconductors are active; the passive-only impedance view leaves them out. */
+  readonly active: boolean;
+  /** External nodes this element touches, for diagnostics. */
+  readonly nodes: readonly Unknown[];
+  /** Branch unknown of a V source or inductor. */
+  readonly branch?: Unknown;
+  loadDc(x: Float64Array, stamp: RealStamp, ctx: DcLoadContext): void;
+  loadAc(stamp: ComplexStamp, ctx: AcLoadContext): void;
+  /** Operating-point report; semiconductors only. Valid after a load at the final solution. */
+  report?(x: Float64Array): DeviceOperatingPoint;
+  /** Current delivered into the circuit by an independent source at the solution. */
+  delivered?(x: Float64Array, srcFactor: number): number;
+}
+
+/** Turns one element into a device, allocating any internal nodes and branches it needs. */
+export type DeviceFactory<E> = (element: E, unknowns: UnknownMap) => Device;

@@ -1,0 +1,147 @@
+// Linear elements: resistor, capacitor (series ESR–ESL), inductor (series winding resistance),
+// independent voltage source (optional series resistance) and current source.
+
+import type { Device } from "../device.js";
+import type { UnknownMap } from "../mna.js";
+import type {
+  CapacitorElement,
+  CurrentSourceElement,
+  InductorElement,
+  ResistorElement,
+  VoltageSourceElement,
+} from "../netlist.js";
+import { voltageOf } from "../stamp.js";
+
+/** SPICE replaces a zero resistance by 1 mΩ; we do the same rather than reject a jumper. */
+const MIN_RESISTANCE = 1e-3;
+/** Floor on a series R-L-C branch impedance so a lossless part at exact resonance stays finite. */
+const MIN_BRANCH_IMPEDANCE = 1e-9;
+
+export function resistorDevice(el: ResistorElement, unknowns: UnknownMap): Device {
+  const a = unknowns.node(el.a);
+  const b = unknowns.node(el.b);
+  const r = Math.abs(el.ohms) < MIN_RESISTANCE ? Math.sign(el.ohms || 1) * MIN_RESISTANCE : el.ohms;
+  const g = 1 / r;
+  return {
+    name: el.name,
+    active: false,
+    nodes: [a, b],
+    loadDc(_x, stamp) { stamp.conductance(a, b, g); },
+    loadAc(stamp) { stamp.admittance(a, b, g, 0); },
+  };
+}
+
+/** Admittance of ESR + jωESL + 1/(jωC), written into a two-element scratch array. */
+export function seriesRlcAdmittance(omega: number, farads: number, esr: number, esl: number, out: [number, number]): [number, number] {
+  if (omega <= 0 || farads <= 0) {
+    out[0] = 0;
+    out[1] = 0;
+    return out;
+  }
+  const zr = esr;
+  let zi = omega * esl - 1 / (omega * farads);
+  let mag2 = zr * zr + zi * zi;
+  if (mag2 < MIN_BRANCH_IMPEDANCE * MIN_BRANCH_IMPEDANCE) {
+    zi = MIN_BRANCH_IMPEDANCE;
+    mag2 = zr * zr + zi * zi;
+  }
+  out[0] = zr / mag2;
+  out[1] = -zi / mag2;
+  return out;
+}
+
+export function capacitorDevice(el: CapacitorElement, unknowns: UnknownMap): Device {
+  const a = unknowns.node(el.a);
+  const b = unknowns.node(el.b);
+  const esr = el.esr ?? 0;
+  const esl = el.esl ?? 0;
+  const y: [number, number] = [0, 0];
+  return {
+    name: el.name,
+    active: false,
+    nodes: [a, b],
+    // Open at DC: nothing to stamp.
+    loadDc() {},
+    loadAc(stamp, ctx) {
+      seriesRlcAdmittance(ctx.omega, el.farads, esr, esl, y);
+      stamp.admittance(a, b, y[0], y[1]);
+    },
+  };
+}
+
+/**
+ * Inductor as a branch equation V(a) − V(b) − (R + jωL)·I = 0, so a winding with R = 0 is an
+ * exact short at DC and inductor loops show up as what they are.
+ */
+export function inductorDevice(el: InductorElement, unknowns: UnknownMap): Device {
+  const a = unknowns.node(el.a);
+  const b = unknowns.node(el.b);
+  const branch = unknowns.branch(el.name);
+  const r = el.series ?? 0;
+  return {
+    name: el.name,
+    active: false,
+    nodes: [a, b],
+    branch,
+    loadDc(_x, stamp) {
+      stamp.entry(a, branch, 1);
+      stamp.entry(b, branch, -1);
+      stamp.entry(branch, a, 1);
+      stamp.entry(branch, b, -1);
+      stamp.entry(branch, branch, -r);
+    },
+    loadAc(stamp, ctx) {
+      stamp.entry(a, branch, 1, 0);
+      stamp.entry(b, branch, -1, 0);
+      stamp.entry(branch, a, 1, 0);
+      stamp.entry(branch, b, -1, 0);
+      stamp.entry(branch, branch, -r, -ctx.omega * el.henries);
+    },
+  };
+}
+
+/** V(pos) − V(neg) − Rs·I = E, with I flowing from pos through the source to neg. */
+export function voltageSourceDevice(el: VoltageSourceElement, unknowns: UnknownMap): Device {
+  const pos = unknowns.node(el.pos);
+  const neg = unknowns.node(el.neg);
+  const branch = unknowns.branch(el.name);
+  const rs = el.series ?? 0;
+  return {
+    name: el.name,
+    active: false,
+    nodes: [pos, neg],
+    branch,
+    loadDc(_x, stamp, ctx) {
+      stamp.entry(pos, branch, 1);
+      stamp.entry(neg, branch, -1);
+      stamp.entry(branch, pos, 1);
+      stamp.entry(branch, neg, -1);
+      stamp.entry(branch, branch, -rs);
+      stamp.rhs(branch, el.dc * ctx.srcFactor);
+    },
+    loadAc(stamp, ctx) {
+      stamp.entry(pos, branch, 1, 0);
+      stamp.entry(neg, branch, -1, 0);
+      stamp.entry(branch, pos, 1, 0);
+      stamp.entry(branch, neg, -1, 0);
+      stamp.entry(branch, branch, -rs, 0);
+      if (ctx.excitedSource === el.name) stamp.rhs(branch, 1, 0);
+    },
+    delivered(x) { return -voltageOf(x, branch); },
+  };
+}
+
+export function currentSourceDevice(el: CurrentSourceElement, unknowns: UnknownMap): Device {
+  const pos = unknowns.node(el.pos);
+  const neg = unknowns.node(el.neg);
+  return {
+    name: el.name,
+    active: false,
+    nodes: [pos, neg],
+    loadDc(_x, stamp, ctx) { stamp.current(pos, neg, el.dc * ctx.srcFactor); },
+    loadAc(stamp, ctx) {
+      if (ctx.excitedSource === el.name) stamp.current(pos, neg, 1, 0);
+    },
+    delivered(_x, srcFactor) { return el.dc * srcFactor; },
+  };
+}
