@@ -45,17 +45,17 @@ const MAX_STALLED_WRITES = 8;
 /**
  * Replaces `path` with `next`, provided it still holds `expected`. Returns where the bytes went
  * (the real path) or why nothing was replaced; on failure the original is untouched and the
- * temporary file removed.
+ * temporary file removed. `name` names the file in the reason (the path itself by default).
  */
-export function replaceFileAtomically(path: string, expected: Uint8Array, next: Uint8Array, fs: WriteFs = nodeWriteFs()): WriteOutcome {
+export function replaceFileAtomically(path: string, expected: Uint8Array, next: Uint8Array, fs: WriteFs = nodeWriteFs(), name: string = path): WriteOutcome {
   let target: string;
   let mode: number;
   try {
     target = fs.realpathSync(path);
-    if (!sameBytes(fs.readFileSync(target), expected)) return { ok: false, reason: `${path} changed since it was checked; not written (run fix again)` };
+    if (!sameBytes(fs.readFileSync(target), expected)) return { ok: false, reason: `${name} changed since it was checked; not written (run fix again)` };
     mode = fs.statSync(target).mode & 0o7777;
   } catch (err) {
-    return { ok: false, reason: `${path} could not be read again before writing (${errorText(err)}); not written` };
+    return { ok: false, reason: `${name} could not be read again before writing (${errorText(err)}); not written` };
   }
 
   const temp = join(dirname(target), `.${basename(target)}.loadline-${process.pid}-${randomBytes(4).toString("hex")}.tmp`);
@@ -74,12 +74,12 @@ export function replaceFileAtomically(path: string, expected: Uint8Array, next: 
     // Look once more just before the rename, to keep the window for a concurrent edit small.
     if (!sameBytes(fs.readFileSync(target), expected)) {
       removeQuietly(fs, temp);
-      return { ok: false, reason: `${path} changed while the fix was being written; not written (run fix again)` };
+      return { ok: false, reason: `${name} changed while the fix was being written; not written (run fix again)` };
     }
     fs.renameSync(temp, target);
   } catch (err) {
     if (created) removeQuietly(fs, temp);
-    return { ok: false, reason: `${path} could not be written (${errorText(err)}); the original is unchanged` };
+    return { ok: false, reason: `${name} could not be written (${errorText(err)}); the original is unchanged` };
   }
   syncFolderQuietly(fs, dirname(target));
   return { ok: true, path: target };
