@@ -2,12 +2,16 @@
 // solver's functions to what the Context offers, so a change in the solver's signatures is absorbed
 // here. Types are re-exported so rule files import them from the engine, not from the solver.
 //
-// INTERIM: the solver (src/solve/index.ts, from-circuit.ts) is being written in parallel. Until it
-// lands, the functions below report "solver not available" and the types mirror its agreed shape.
+// INTERIM: src/solve/from-circuit.ts is being written in parallel; until it lands `buildSolver`
+// reports "solver not available" and every analysis that needs the netlist says so.
 import type { Circuit, Part } from "../circuit/types.js";
 import type { SolverCircuit } from "../solve/netlist.js";
 import type { ComplexPoint } from "./context-types.js";
 import type { OperatingPoint } from "../solve/types.js";
+import { acSweep, impedanceToGround, solveOperatingPoint, THERMAL_VOLTAGE } from "../solve/index.js";
+import { E_SERIES } from "../solve/eseries.js";
+import type { ESeriesName } from "../solve/eseries.js";
+import { estimateCapacitorParasitics, selfResonantFrequency } from "../solve/parasitics.js";
 
 export type { BjtOperatingPoint, DeviceOperatingPoint, DiodeOperatingPoint, JfetOperatingPoint, MosfetOperatingPoint, OperatingPoint } from "../solve/types.js";
 
@@ -58,41 +62,76 @@ export function buildSolver(_circuit: Circuit, _railVolts: Record<string, number
   return { ok: false, problem: NOT_YET };
 }
 
-export function solveDc(_solver: SolverCircuit): OperatingPoint {
-  return { converged: false, method: "newton", iterations: 0, nodeVoltages: {}, branchCurrents: {}, deliveredCurrents: {}, devices: {}, problem: NOT_YET };
+export function solveDc(solver: SolverCircuit): OperatingPoint {
+  return solveOperatingPoint(solver);
 }
 
-export function impedanceAt(_solver: SolverCircuit, _op: OperatingPoint | null, _node: string, _freqs: number[], _passiveOnly: boolean): ComplexPoint[] | undefined {
-  return undefined;
+function toPoints(frequencies: number[], re: ArrayLike<number>, im: ArrayLike<number>): ComplexPoint[] {
+  return frequencies.map((hertz, k) => {
+    const r = re[k] ?? Number.NaN;
+    const i = im[k] ?? Number.NaN;
+    return { hertz, re: r, im: i, magnitude: Math.hypot(r, i) };
+  });
 }
 
-export function impedanceBetweenAt(_solver: SolverCircuit, _op: OperatingPoint | null, _a: string, _b: string, _freqs: number[], _passiveOnly: boolean): ComplexPoint[] | undefined {
-  return undefined;
+/** Z from a node to ground (1 A injected). Undefined when the network could not be solved. */
+export function impedanceAt(solver: SolverCircuit, op: OperatingPoint | null, node: string, freqs: number[], passiveOnly: boolean): ComplexPoint[] | undefined {
+  const points = impedanceToGround(solver, op, node, freqs, { passiveOnly });
+  if (points.some((p) => !Number.isFinite(p.mag))) return undefined;
+  return points.map((p) => ({ hertz: p.f, re: p.re, im: p.im, magnitude: p.mag }));
 }
 
-// INTERIM until src/solve/eseries.ts lands: one decade of each series, IEC 60063 Table 1
-// (reference-data §1.1). E48 and finer fall back to E24 for now.
-const DECADES: Record<string, number[]> = {
-  E3: [1.0, 2.2, 4.7],
-  E6: [1.0, 1.5, 2.2, 3.3, 4.7, 6.8],
-  E12: [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2],
-  E24: [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1],
-};
-
-/** The mantissas of one decade of a series, ascending (1.0 … 9.1 for E24). */
-export function seriesDecade(series: string): number[] {
-  return DECADES[series] ?? DECADES.E24 ?? [];
+/** Z between two nodes: 1 A driven into `a` and drawn from `b`, Z = V(a) − V(b). Needs the
+ * operating point (the passive-only view removes every source, the probe included). */
+export function impedanceBetweenAt(solver: SolverCircuit, op: OperatingPoint | null, a: string, b: string, freqs: number[], passiveOnly: boolean): ComplexPoint[] | undefined {
+  if (passiveOnly) return undefined;
+  // SPICE sign: the source's current leaves it at `neg`, so neg = a puts 1 A into a.
+  const probe = { kind: "I" as const, name: "Iprobe_between", pos: b, neg: a, dc: 0, ac: 1 };
+  const circuit: SolverCircuit = { title: solver.title, elements: [...solver.elements, probe] };
+  const ac = acSweep(circuit, op, freqs, { kind: "source", name: probe.name });
+  if (ac.problem !== undefined) return undefined;
+  const zero = { re: new Float64Array(freqs.length), im: new Float64Array(freqs.length) };
+  const va = a === "0" ? zero : ac.nodeVoltages[a];
+  const vb = b === "0" ? zero : ac.nodeVoltages[b];
+  if (!va || !vb) return undefined;
+  const re = freqs.map((_, k) => (va.re[k] ?? Number.NaN) - (vb.re[k] ?? Number.NaN));
+  const im = freqs.map((_, k) => (va.im[k] ?? Number.NaN) - (vb.im[k] ?? Number.NaN));
+  const points = toPoints(freqs, re, im);
+  return points.some((p) => !Number.isFinite(p.magnitude)) ? undefined : points;
 }
 
-export function transferAt(_solver: SolverCircuit, _op: OperatingPoint | null, _input: string, _output: string, _freqs: number[]): ComplexPoint[] | undefined {
-  return undefined;
+/** V(output)/V(input) with a test current driven into the input node (independent of what drives it). */
+export function transferAt(solver: SolverCircuit, op: OperatingPoint | null, input: string, output: string, freqs: number[]): ComplexPoint[] | undefined {
+  const ac = acSweep(solver, op, freqs, { kind: "current", node: input });
+  const vin = ac.nodeVoltages[input];
+  const vout = output === "0" ? undefined : ac.nodeVoltages[output];
+  if (ac.problem !== undefined || !vin || !vout) return undefined;
+  const re: number[] = [];
+  const im: number[] = [];
+  freqs.forEach((_, k) => {
+    const ar = vout.re[k] ?? Number.NaN, ai = vout.im[k] ?? Number.NaN;
+    const br = vin.re[k] ?? Number.NaN, bi = vin.im[k] ?? Number.NaN;
+    const d = br * br + bi * bi;
+    re.push((ar * br + ai * bi) / d);
+    im.push((ai * br - ar * bi) / d);
+  });
+  return toPoints(freqs, re, im);
 }
 
-export function capacitorModel(_part: Part): CapacitorModel | undefined {
-  return undefined;
+/** The mantissas of one decade of a series, ascending (1.0 … 9.1 for E24), IEC 60063. */
+export function seriesDecade(series: ESeriesName): readonly number[] {
+  return E_SERIES[series];
 }
 
+
+export function capacitorModel(part: Part): CapacitorModel | undefined {
+  const farads = part.parsed.number;
+  if (farads === undefined || !(farads > 0)) return undefined;
+  const { esr, esl, basis } = estimateCapacitorParasitics(part);
+  return { farads, esr, esl, srfHertz: selfResonantFrequency(farads, esl), source: basis };
+}
+
+/** kT/q at the solver's analysis temperature (27 °C, as SPICE and ngspice default). */
 export function thermalVoltage(): number {
-  // kT/q at 27 °C, the temperature SPICE (and ngspice's default TNOM) uses.
-  return (1.380649e-23 * 300.15) / 1.602176634e-19;
+  return THERMAL_VOLTAGE;
 }
