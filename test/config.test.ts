@@ -8,6 +8,7 @@ import { defaultConfig, findConfigFile, formatConfigError, loadConfig, DEFAULTS 
 import type { RuleInfo } from "../src/engine/rule.js";
 import { resolveRuleOptions } from "../src/engine/rule.js";
 import { memoryFileSource } from "../src/read/file-source.js";
+import { allRules } from "../rules/index.js";
 
 const RULES: RuleInfo[] = [
   {
@@ -144,9 +145,11 @@ describe("example configs in the repository", () => {
   });
   for (const path of found) {
     it(`${relative(repo, path)} validates against schema/loadline.schema.json and loads cleanly`, () => {
-      const data: unknown = JSON.parse(readFileSync(path, "utf8"));
-      const ok = validate(data);
+      const text = readFileSync(path, "utf8");
+      const ok = validate(JSON.parse(text));
       expect(ok ? "" : ajv.errorsText(validate.errors)).toBe("");
+      // …and names only rules and options that exist, so an example cannot drift from the code.
+      expect(loadConfig(text, relative(repo, path), allRules).errors).toEqual([]);
     });
   }
 });

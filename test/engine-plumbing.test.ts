@@ -8,6 +8,9 @@ import { countBySeverity, exitCodeFor } from "../src/engine/result.js";
 import type { LintResult } from "../src/engine/result.js";
 import type { Finding } from "../src/engine/types.js";
 import type { Part } from "../src/circuit/types.js";
+import { ruleLevel, runRules } from "../src/engine/runner.js";
+import { checkRuleOption } from "../src/engine/rule.js";
+import type { Rule } from "../src/engine/rule.js";
 
 function demoPart(ref: string, fields: Record<string, string>): Part {
   return {
@@ -142,5 +145,53 @@ describe("countBySeverity and exitCodeFor (exit codes as design.md states them)"
     expect(exitCodeFor(warn, "never")).toBe(0);
     const broken = result([design([], [{ file: "bad.kicad_sch", line: 3, column: 1, message: "expected ')'" }])]);
     expect(exitCodeFor(broken, "never")).toBe(2);
+  });
+});
+
+describe("runRules (the runner contract)", () => {
+  const ctx = { board: "demo" };
+  const make = (id: string, severity: Finding["severity"], check: Rule<typeof ctx>["check"]): Rule<typeof ctx> => ({
+    id, title: id, severity, doc: { what: "", why: "", fix: "", references: [] },
+    options: { limitOhms: { type: "number", default: "2.5 ohm", unit: "Ω", description: "demo" } }, check,
+  });
+  const seen: unknown[] = [];
+  const rules = [
+    make("a-rule", "warning", (_c, options) => {
+      seen.push(options["limitOhms"]);
+      return [demoFinding("wrong-id", ["R1"], "note")];
+    }),
+    make("b-rule", "error", () => [demoFinding("b-rule", ["R2"], "error")]),
+    make("c-rule", "note", () => {
+      throw new Error("demo failure");
+    }),
+  ];
+
+  it("passes resolved options, stamps the rule id, applies configured severity, skips 'off', isolates a throwing rule", () => {
+    const config = { rules: { "a-rule": { severity: "error" as const, options: { limitOhms: 1.5 } }, "b-rule": { severity: "off" as const, options: {} } } };
+    const out = runRules(rules, ctx, config, "board.kicad_sch");
+    expect(seen).toEqual([1.5]);
+    expect(out.findings.map((f) => [f.rule, f.severity])).toEqual([["a-rule", "error"]]);
+    expect(out.problems).toHaveLength(1);
+    expect(out.problems[0]?.message).toContain("rule 'c-rule' stopped with an internal error");
+    expect(out.problems[0]?.message).toContain("demo failure");
+  });
+
+  it("keeps a rule's own per-finding severity when the config sets none, and reads unit defaults ('2.5 ohm' = 2.5 Ω)", () => {
+    seen.length = 0;
+    const out = runRules(rules.slice(0, 2), ctx, { rules: {} }, "board.kicad_sch");
+    expect(out.findings.map((f) => f.severity)).toEqual(["note", "error"]);
+    expect(seen[0]).toBeCloseTo(2.5, 12);
+    expect(ruleLevel(rules[1] ?? rules[0]!, { rules: { "b-rule": { severity: "off", options: {} } } })).toBe("off");
+  });
+});
+
+describe("checkRuleOption", () => {
+  it("converts quantities with SI prefixes (BIPM SI Brochure: k = 1e3, M = 1e6) and refuses the wrong kind", () => {
+    const freq = { type: "number" as const, default: "10MHz", unit: "Hz", description: "" };
+    const ok = checkRuleOption(freq, "455 kHz");
+    expect(ok.ok && ok.value).toBeCloseTo(455e3, 6);
+    expect(checkRuleOption(freq, "455 kV")).toEqual({ ok: false, expected: "a frequency such as '10MHz'" });
+    expect(checkRuleOption({ type: "string[]", default: [], description: "", enum: ["a", "b"] }, ["a", "c"])).toEqual({ ok: false, expected: "a list of 'a', 'b'" });
+    expect(checkRuleOption({ type: "boolean", default: false, description: "" }, "yes")).toEqual({ ok: false, expected: "true or false" });
   });
 });
