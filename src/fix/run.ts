@@ -126,6 +126,13 @@ export function runFix(request: FixRequest): FixReport {
     report.errors.push(...[...(before.errors ?? []), ...before.designs.flatMap((d) => d.errors)].map((e) => ({ ...e, file: display(e.file) })));
     return report;
   }
+  const known = new Set((before.rules ?? []).map((r) => r.id));
+  const unknown = (request.rules ?? []).filter((id) => !known.has(id));
+  if (unknown.length > 0) {
+    const list = [...known].sort().join(", ");
+    report.errors.push({ file: "", line: 0, column: 0, message: `--rule ${unknown.join(", ")}: no such rule (rules: ${list})` });
+    return report;
+  }
   const baseline: Baseline = { designs: before.designs, circuits: new Map() };
   const planDesigns = [];
   for (const design of before.designs) {
