@@ -15,7 +15,7 @@ const repo = new URL("..", import.meta.url).pathname;
 let work = "";
 
 function cli(args: string[], cwd = work): { code: number | null; stdout: string; stderr: string } {
-  const env = { ...process.env, NO_COLOR: "1" };
+  const env: NodeJS.ProcessEnv = { ...process.env, NO_COLOR: "1" };
   delete env["GITHUB_WORKSPACE"];
   const r = spawnSync(process.execPath, [join(repo, "scripts/run-ts.mjs"), join(repo, "src/cli/index.ts"), ...args], { cwd, encoding: "utf8", env, timeout: 60_000 });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
