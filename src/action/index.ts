@@ -46,7 +46,7 @@ async function run(): Promise<number> {
   const result = lint({
     paths: paths.length > 0 ? paths : ["."],
     cwd: workspace,
-    ...(configInput !== "" ? { configPath: configInput } : {}),
+    ...(configInput !== "" ? { configPath: resolve(workspace, configInput) } : {}),
   });
   const base = { cwd: workspace, root: workspace };
   const counts = countBySeverity(result);
