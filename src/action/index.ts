@@ -12,6 +12,7 @@ import { annotationLine, formatAnnotations } from "../report/github.js";
 import { formatHtml } from "../report/html.js";
 import { formatMarkdown } from "../report/markdown.js";
 import { formatSarif } from "../report/sarif.js";
+import { runFixStep } from "../fix/action-step.js";
 
 const FAIL_ON: readonly FailOn[] = ["error", "warning", "note", "never"];
 
@@ -42,6 +43,17 @@ async function run(): Promise<number> {
   const htmlInput = core.getInput("html-file");
   const annotate = booleanInput("annotations");
   const summarize = booleanInput("summary");
+  // `fix: true` makes the proposed value changes first, so the report below describes the fixed files.
+  const fixAsked = core.getInput("fix") !== "" && booleanInput("fix");
+  let fixFailed = false;
+  if (fixAsked) {
+    const step = runFixStep({ paths: paths.length > 0 ? paths : ["."], cwd: workspace, ...(configInput !== "" ? { configPath: configInput } : {}) });
+    for (const line of step.lines) process.stdout.write(`${line}\n`);
+    core.setOutput("fixed-files", step.changedFiles.join("\n"));
+    fixFailed = step.code === 2;
+  } else {
+    core.setOutput("fixed-files", "");
+  }
 
   const result = lint({
     paths: paths.length > 0 ? paths : ["."],
@@ -71,7 +83,7 @@ async function run(): Promise<number> {
   core.setOutput("warnings", String(counts.warning));
   core.setOutput("notes", String(counts.note));
 
-  const code = exitCodeFor(result, failOn);
+  const code = fixFailed ? 2 : exitCodeFor(result, failOn);
   const tally = `${counts.error} error(s), ${counts.warning} warning(s), ${counts.note} note(s), ${counts.suppressed} suppressed`;
   if (code === 2) core.info(`loadline: the run failed (see the errors above); ${tally}`);
   else if (code === 1) core.info(`loadline: findings at or above '${failOn}': ${tally}`);
