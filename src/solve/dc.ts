@@ -4,7 +4,7 @@
 // source stepping (supplies ramped up from zero). Every loop is bounded by an iteration cap and
 // a wall-clock deadline, so a hopeless circuit returns a reason instead of hanging.
 
-import type { DcLoadContext, DcMode } from "./device.js";
+import { TOLERANCES, type DcLoadContext, type DcMode } from "./device.js";
 import { diagnoseTopology } from "./diagnose.js";
 import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
 import { RealSystem, type Unknown } from "./mna.js";
@@ -21,9 +21,7 @@ export interface DcOptions {
   gmin?: number;
 }
 
-const RELTOL = 1e-3;
-const VNTOL = 1e-6;
-const ABSTOL = 1e-12;
+const { reltol: RELTOL, vntol: VNTOL, abstol: ABSTOL } = TOLERANCES;
 /** Iterations for the first, plain attempt (SPICE's ITL1). */
 const PLAIN_NEWTON_LIMIT = 100;
 /** Iterations per continuation step. */
@@ -108,10 +106,15 @@ class DcSolver {
       if (!finite) return { ok: false, iterations: iter + 1, reason: "not-finite" };
       [this.x, this.xNew] = [this.xNew, this.x];
       const first = iter === 0 && run.firstMode === "init-junction";
-      if (!first && !limited && worstRatio <= 1) return { ok: true, iterations: iter + 1 };
+      if (!first && !limited && worstRatio <= 1 && this.devicesSettled()) return { ok: true, iterations: iter + 1 };
       if (iter === run.limit - 1) return { ok: false, iterations: iter + 1, reason: "iterations", worstUnknown, worstStep };
     }
     return { ok: false, iterations: run.limit, reason: "iterations", worstUnknown: -1, worstStep: 0 };
+  }
+
+  private devicesSettled(): boolean {
+    for (const device of this.elaborated.devices) if (device.converged && !device.converged(this.x)) return false;
+    return true;
   }
 
   /** Evaluates every device exactly at the accepted solution so reports match the node voltages. */

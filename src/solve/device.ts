@@ -24,6 +24,15 @@ export interface DcLoadContext {
   limited: boolean;
 }
 
+/** SPICE's convergence tolerances (RELTOL, VNTOL, ABSTOL). */
+export const TOLERANCES = { reltol: 1e-3, vntol: 1e-6, abstol: 1e-12 } as const;
+
+/** True when the change from `previous` to `next` is within SPICE's current tolerance. */
+export function currentSettled(predicted: number, previous: number): boolean {
+  const tol = TOLERANCES.reltol * Math.max(Math.abs(predicted), Math.abs(previous)) + TOLERANCES.abstol;
+  return Math.abs(predicted - previous) <= tol;
+}
+
 export interface AcLoadContext {
   omega: number;
   /** Name of the one independent source driven with unit amplitude, or null. */
@@ -40,6 +49,12 @@ export interface Device {
   readonly branch?: Unknown;
   loadDc(x: Float64Array, stamp: RealStamp, ctx: DcLoadContext): void;
   loadAc(stamp: ComplexStamp, ctx: AcLoadContext): void;
+  /**
+   * Device-level convergence test of a new iterate: the currents its linearisation predicts at
+   * `x` must be within tolerance of those at the last load. Node voltages alone are not enough:
+   * a millivolt on a junction is several per cent of its current.
+   */
+  converged?(x: Float64Array): boolean;
   /** Operating-point report; semiconductors only. Valid after a load at the final solution. */
   report?(x: Float64Array): DeviceOperatingPoint;
   /** Current delivered into the circuit by an independent source at the solution. */

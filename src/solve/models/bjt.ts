@@ -6,7 +6,7 @@
 // Not modelled: the current dependence of RB (IRB/RBM), excess phase (PTF), substrate junction
 // (CJS), quasi-saturation; temperature is 27 °C = TNOM so XTI/EG/XTB have no effect.
 
-import type { DcLoadContext, Device } from "../device.js";
+import { currentSettled, type DcLoadContext, type Device } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { BjtElement } from "../netlist.js";
 import { voltageOf, type ComplexStamp, type RealStamp, type Unknown } from "../stamp.js";
@@ -295,6 +295,13 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
       stamp.transconductance(bp, ep, bp, ep, s.gpi);
       stamp.transconductance(bp, ep, bp, cp, s.gmu);
       stamp.current(bp, ep, t * (s.cb - s.gpi * vbe - s.gmu * vbc));
+    },
+    converged(x) {
+      const dvbe = t * (voltageOf(x, bp) - voltageOf(x, ep)) - s.vbe;
+      const dvbc = t * (voltageOf(x, bp) - voltageOf(x, cp)) - s.vbc;
+      const ccHat = s.cc + (s.gm + s.go) * dvbe - (s.go + s.gmu) * dvbc;
+      const cbHat = s.cb + s.gpi * dvbe + s.gmu * dvbc;
+      return currentSettled(ccHat, s.cc) && currentSettled(cbHat, s.cb);
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;

@@ -3,7 +3,7 @@
 // capacitance TT·gd. Breakdown voltage is adjusted at set-up so the current at −BV is IBV, as
 // SPICE does.
 
-import type { Device, DcLoadContext } from "../device.js";
+import { currentSettled, type DcLoadContext, type Device } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { DiodeElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -131,6 +131,10 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
       if (k.gs > 0) stamp.conductance(anode, junctionAnode, k.gs);
       stamp.conductance(junctionAnode, cathode, gd);
       stamp.current(junctionAnode, cathode, id - gd * vd);
+    },
+    converged(x) {
+      const vd = voltageOf(x, junctionAnode) - voltageOf(x, cathode);
+      return currentSettled(state.id + state.gd * (vd - state.vd), state.id);
     },
     loadAc(stamp, ctx) {
       if (k.gs > 0) stamp.admittance(anode, junctionAnode, k.gs, 0);

@@ -4,8 +4,10 @@
 // depletion capacitances CGS/CGD with PB, M and FC.
 // Not modelled: ngspice's doping-tail parameter B (taken at its default 1, i.e. pure
 // Shichman–Hodges), recombination current ISR/NR, temperature coefficients.
+// N and M are honoured as PSpice-style cards intend them; ngspice's level-1 JFET has neither
+// (ideal gate diodes, grading fixed at 0.5), so they match ngspice when left at their defaults.
 
-import type { Device } from "../device.js";
+import { currentSettled, type Device } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { JfetElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -195,6 +197,15 @@ export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
       stamp.transconductance(dp, sp, g, sp, s.gm);
       stamp.transconductance(dp, sp, dp, sp, s.gds);
       stamp.current(dp, sp, t * (s.ids - s.gm * vgs - s.gds * vds));
+    },
+    converged(x) {
+      const dvgs = t * (voltageOf(x, g) - voltageOf(x, sp)) - s.vgs;
+      const dvgd = t * (voltageOf(x, g) - voltageOf(x, dp)) - s.vgd;
+      const cg = s.cgsDiode + s.cgdDiode;
+      const cd = s.ids - s.cgdDiode;
+      const cgHat = cg + s.ggs * dvgs + s.ggd * dvgd;
+      const cdHat = cd + s.gm * dvgs + s.gds * (dvgs - dvgd) - s.ggd * dvgd;
+      return currentSettled(cgHat, cg) && currentSettled(cdHat, cd);
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;

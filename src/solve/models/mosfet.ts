@@ -7,7 +7,7 @@
 // perimeter junction capacitances (CJ, CJSW need AD/AS/PD/PS), RSH, process-derived parameters
 // (KP from UO/TOX, VTO from NSUB), temperature coefficients.
 
-import type { Device } from "../device.js";
+import { currentSettled, type Device } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { MosfetElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -284,6 +284,20 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
         stamp.transconductance(sp, dp, b, dp, s.gmbs);
         stamp.current(sp, dp, t * (s.cdrain - s.gm * vgd - s.gds * -vds - s.gmbs * vbd));
       }
+    },
+    converged(x) {
+      const vgs = t * (voltageOf(x, g) - voltageOf(x, sp));
+      const vds = t * (voltageOf(x, dp) - voltageOf(x, sp));
+      const vbs = t * (voltageOf(x, b) - voltageOf(x, sp));
+      const dvgs = vgs - s.vgs, dvds = vds - s.vds, dvbs = vbs - s.vbs;
+      const dvbd = dvbs - dvds, dvgd = dvgs - dvds;
+      const cd = s.mode * s.cdrain - s.cbd;
+      const cdHat = s.mode === 1
+        ? cd - s.gbd * dvbd + s.gmbs * dvbs + s.gm * dvgs + s.gds * dvds
+        : cd - (s.gbd - s.gmbs) * dvbd - s.gm * dvgd + s.gds * dvds;
+      const cb = s.cbs + s.cbd;
+      const cbHat = cb + s.gbd * dvbd + s.gbs * dvbs;
+      return currentSettled(cdHat, cd) && currentSettled(cbHat, cb);
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;
