@@ -118,7 +118,7 @@ describe("random value edits on fixture boards", () => {
             }
           },
         ),
-        { numRuns: 40 },
+        { numRuns: 25 },
       );
     });
   }

@@ -8,6 +8,7 @@ import { chmodSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { fixExitCode, runFix, type FixRequest } from "../src/fix/run.js";
+import { readDesign } from "../src/read/index.js";
 import { nodeWriteFs, type WriteFs } from "../src/fix/write.js";
 import { copyFixtures, forbidRule, wishRule } from "./fix-helpers.js";
 
@@ -139,6 +140,38 @@ describe("loadline fix on a sheet used by two sheet instances", () => {
   it("refuses when only one instance asks", () => {
     const report = run([RECEIVER], [wishRule({ R107: "6k8" })]);
     expect(report.refused[0]?.reason).toMatch(/R207 \(\/channel 2\/\) has no fix for it: not changed$/);
+  });
+});
+
+describe("loadline fix on a KiCad 6 file with per-instance values", () => {
+  it("fixes each instance's own value in the root's symbol_instances, even to different values", () => {
+    const root = "two-channel-v6/receiver.kicad_sch";
+    const original = bytes(root);
+    const child = bytes("two-channel-v6/channel.kicad_sch");
+    const report = run([root], [wishRule({ R107: "6k8", R207: "7k5" })]);
+    expect(report.refused).toEqual([]);
+    const instanceValue = (ref: string, value: string) => Buffer.from(`(reference "${ref}") (unit 1) (value "${value}")`);
+    let expected = original;
+    for (const [ref, from, to] of [["R107", "7k3", "6k8"], ["R207", "7k3", "7k5"]] as const) {
+      const at = expected.indexOf(instanceValue(ref, from));
+      expected = Buffer.concat([expected.subarray(0, at), instanceValue(ref, to), expected.subarray(at + instanceValue(ref, from).length)]);
+    }
+    expect(bytes(root).equals(expected)).toBe(true);
+    expect(bytes("two-channel-v6/channel.kicad_sch").equals(child)).toBe(true);
+  });
+});
+
+describe("the fix boards", () => {
+  it("read to the nets worked out by hand in fixtures/fix/README.md", () => {
+    const nets = (file: string) => {
+      const read = readDesign(join(dir, file));
+      if (!read.ok) throw new Error(read.error.message);
+      return Object.fromEntries(read.circuit.nets.map((n) => [n.name, n.pins.map((p) => `${p.ref}.${p.pin}`).sort().join(" ")]));
+    };
+    expect(nets(DIVIDER)).toEqual({ "+9V": "R1.1", "/BIAS": "C1.1 R1.2 R2.1 R3.1", GND: "C1.2 R2.2 R3.2" });
+    const receiver = { "/ANT1": "R107.1 R108.1 R91.1", "/ANT2": "R207.1 R208.1 R92.1", "/IF1": "R108.2", "/IF2": "R208.2", GND: "R107.2 R207.2 R91.2 R92.2" };
+    expect(nets(RECEIVER)).toEqual(receiver);
+    expect(nets("two-channel-v6/receiver.kicad_sch")).toEqual(receiver);
   });
 });
 
