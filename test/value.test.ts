@@ -113,6 +113,14 @@ describe("value spellings seen in real KiCad files (notes §13.1)", () => {
     expect(v.warning).toMatch(/decimal comma or a thousands separator/);
     expect(parseValue("4,7K", "resistor", {}).warning).toBeUndefined();
   });
+
+  it("warns when a capacitor's bare number reads as whole farads (`0.1` meant 0.1 µF on older drawings [CP])", () => {
+    const v = parseValue("0.1", "capacitor", {});
+    expect(v.number).toBe(0.1);
+    expect(v.warning).toMatch(/reads as 0.1 F; write 0.1uF/);
+    expect(parseValue("100n", "capacitor", {}).warning).toBeUndefined();
+    expect(parseValue("470", "resistor", {}).warning).toBeUndefined();
+  });
 });
 
 describe("values that cannot be read are flagged, never guessed", () => {

@@ -389,6 +389,14 @@ function ambiguousCommaWarning(reading: Reading, text: string): string | undefin
   return `'${text}' has a comma that may be a decimal comma or a thousands separator: read as ${asDecimal}, not ${asThousands}; write ${asDecimal.replace(/0+$/, "")} or ${asThousands} with no comma to make it plain`;
 }
 
+/** `0.1` or `47` on a capacitor is 0.1 F or 47 F to a simulator; older drawings meant microfarads. */
+function bareNumberWarning(reading: Reading, quantity: Quantity, text: string): string | undefined {
+  if (reading.style !== "plain" || reading.number < 1e-3) return undefined;
+  if (quantity.unit !== "F" && quantity.unit !== "H") return undefined;
+  const micro = quantity.unit === "F" ? "uF" : "uH";
+  return `'${text}' has no multiplier and reads as ${reading.number} ${quantity.unit}; write ${text}${micro} if micro${quantity.unit === "F" ? "farads" : "henries"} were meant`;
+}
+
 /** Reads a Value field for a part of the given kind. Fields supply ratings and tolerance
  * (`Voltage`, `Rating`, `V`, `Tolerance`, `Tol`, `Power`, any case). */
 export function parseValue(text: string, kind: PartKind, fields: Record<string, string>): ParsedValue {
@@ -431,7 +439,7 @@ export function parseValue(text: string, kind: PartKind, fields: Record<string, 
   out.number = reading.number;
   out.unit = quantity.unit;
   out.style = reading.style;
-  const warning = ambiguousCommaWarning(reading, text.trim());
+  const warning = ambiguousCommaWarning(reading, text.trim()) ?? bareNumberWarning(reading, quantity, text.trim());
   if (warning) out.warning = warning;
   mergeAttributes(out, attributesFromTokens(toks.slice(main.consumed)), fromFields);
   return out;
