@@ -80,13 +80,19 @@ export function register(program: Command): void {
   program
     .command("fix")
     .description("make the value changes the checks propose, in the schematic files (atomic, verified)")
-    .argument("[paths...]", "design files (.kicad_sch), folders or globs", [])
-    .option("-r, --rule <id>", "only fixes from this rule (repeatable)", (value: string, previous: string[]) => [...previous, value], [])
+    .argument("[paths...]", "design files (.kicad_sch), folders or globs (default: the current folder)")
+    .option("-r, --rule <id>", "only fixes from this rule (repeatable)", (value: string, previous: string[] | undefined) => [...(previous ?? []), value])
     .option("-n, --dry-run", "print a unified diff of the changes instead of writing them")
     .option("-c, --config <file>", "config file (default: the nearest loadline.json above each design)")
     .option("--no-color", "plain text without colours")
-    .action((paths: string[], opts: { rule: string[]; dryRun?: boolean; config?: string; color: boolean }) => {
-      const code = runFixCommand(paths, { rule: opts.rule, dryRun: opts.dryRun ?? false, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}) }, {
+    .addHelpText(
+      "after",
+      "\nOnly Value strings change; each change is checked (same nets, the finding gone, no new finding)\n" +
+        "before and after it is written. Review the diff before you build: a value the checks accept can\n" +
+        "still be wrong for power, voltage or safety ratings the schematic does not state.",
+    )
+    .action((paths: string[] | undefined, opts: { rule?: string[]; dryRun?: boolean; config?: string; color: boolean }) => {
+      const code = runFixCommand(paths ?? [], { rule: opts.rule ?? [], dryRun: opts.dryRun ?? false, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}) }, {
         stdout: (s) => process.stdout.write(s),
         stderr: (s) => process.stderr.write(s),
         cwd: process.cwd(),
