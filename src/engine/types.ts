@@ -6,6 +6,8 @@ export type Severity = "error" | "warning" | "note";
 /** A precise text edit: replace the characters of `span` in `span.file` with `replacement`. */
 export interface FixEdit {
   span: TextSpan;
+  /** The new value as plain text (`6k8`), not quoted: `span` covers a whole quoted string token and
+   * `loadline fix` writes the replacement as a quoted KiCad string, escaping `"` and `\`. */
   replacement: string;
   /** One line for people: "R7 7.5k -> 6.8k". */
   description: string;
