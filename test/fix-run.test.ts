@@ -137,6 +137,19 @@ describe("loadline fix on a sheet used by two sheet instances", () => {
     expect(fixExitCode(report)).toBe(1);
   });
 
+  it("works from a cwd other than the process's folder, naming files relative to that cwd", () => {
+    const home = process.cwd();
+    process.chdir(dir); // files now sit inside the process's folder, as in a real run
+    try {
+      const report = runFix({ paths: ["receiver.kicad_sch"], cwd: join(dir, "two-channel"), lintRules: [wishRule({ R107: "6k8", R207: "6k8" })] });
+      expect(report.errors).toEqual([]);
+      expect(report.files.map((f) => [f.display, f.written])).toEqual([["channel.kicad_sch", true]]);
+    } finally {
+      process.chdir(home);
+    }
+    expect(bytes(CHANNEL).toString("utf8")).toContain('(property "Value" "6k8"');
+  });
+
   it("refuses when only one instance asks", () => {
     const report = run([RECEIVER], [wishRule({ R107: "6k8" })]);
     expect(report.refused[0]?.reason).toMatch(/R207 \(\/channel 2\/\) has no fix for it: not changed$/);

@@ -110,18 +110,18 @@ export function runFix(request: FixRequest): FixReport {
   };
 
   const snapshot = snapshotSource(inner);
-  // lint reads relative paths from the process's folder, whatever its `cwd` says; absolute paths
-  // mean the same thing to both, and messages are made relative to `cwd` again by `display`.
+  // lint and the reader open relative paths from the process's folder, and name files relative to
+  // it; so lint is given absolute paths, and `display` makes names relative to `cwd` for messages.
   const lintWith = (fs: FileSource, paths: string[], lister?: PathLister): LintResult =>
     lint({
-      paths: paths.map((p) => resolve(cwd, p)),
+      paths: paths.map((p) => resolve(p)),
       fs,
       lister: lister ?? filesOnly,
       ...(request.configPath !== undefined ? { configPath: request.configPath } : {}),
       ...(request.lintRules !== undefined ? { rules: request.lintRules } : {}),
     });
 
-  const before = lintWith(snapshot.source, request.paths, request.lister ?? (request.source === undefined ? nodePathLister() : undefined));
+  const before = lintWith(snapshot.source, request.paths.map((p) => resolve(cwd, p)), request.lister ?? (request.source === undefined ? nodePathLister() : undefined));
   if (hasRunErrors(before)) {
     report.errors.push(...[...(before.errors ?? []), ...before.designs.flatMap((d) => d.errors)].map((e) => ({ ...e, file: display(e.file) })));
     return report;
@@ -302,7 +302,7 @@ function checkDesign(
     return `the check fails on the edited design (${first?.message ?? "unknown error"})`;
   }
   for (const { design, index } of touched) {
-    const now = after.designs.find((d) => d.file === design.file);
+    const now = after.designs.find((d) => resolve(d.file) === resolve(design.file));
     if (now === undefined) return `${design.file} was not checked again`;
     const gone: ExpectedGone[] = edits.flatMap((e) => e.wishes.filter((w) => w.design === index).map((w) => ({ rule: w.rule, ref: w.ref })));
     const problem = findingDifference(design.findings, now.findings, gone);
@@ -317,9 +317,11 @@ function restore(file: FileBytes, writeFs: WriteFs, display: (file: string) => s
   return outcome.ok ? "the original was restored" : `the original could NOT be restored (${outcome.reason}); check ${display(file.file)} by hand`;
 }
 
-/** A path for messages: relative to `cwd` when inside it, `/`-separated. */
+/** A path for messages: relative to `cwd` when inside it, `/`-separated. `file` is as the reader
+ * names it (absolute, or relative to the process's folder). */
 export function displayPath(cwd: string, file: string): string {
-  const rel = relative(cwd, resolve(cwd, file));
-  const shown = rel === "" || rel.startsWith("..") ? resolve(cwd, file) : rel;
+  const absolute = resolve(file);
+  const rel = relative(cwd, absolute);
+  const shown = rel === "" || rel === ".." || rel.startsWith(`..${sep}`) ? absolute : rel;
   return sep === "/" ? shown : shown.split(sep).join("/");
 }
