@@ -282,3 +282,57 @@ describe("parts", () => {
     expect(c.parts.map((p) => p.ref)).toEqual(["R2", "R10"]);
   });
 });
+
+describe("more constructs", () => {
+  it("a derived library symbol (extends) takes its parent's pins (KiCad format notes §5)", () => {
+    const derived = `(symbol "Device:R_Precision" (extends "R") (property "Reference" "R" (at 0 0 0)) (property "Value" "R_Precision" (at 0 0 0)))`;
+    const c = read(schematic([
+      place({ lib: "Device:R_Precision", ref: "R1", value: "1k", x: 50.8, y: 50.8 }),
+      label("TOP", 50.8, 46.99),
+    ], { libs: [LIB_R, derived] }));
+    expect(c.parts[0]?.pins).toEqual({ "1": "/TOP", "2": "Net-(R1-Pad2)" });
+  });
+
+  it("a bus-entry end splits the wire it sits on (§8.2 rule 4), so a wire ending there connects", () => {
+    const c = read(schematic([
+      place({ lib: "Device:R", ref: "R1", x: 50.8, y: 49.53 }), // pin 1 at (50.8, 45.72)
+      place({ lib: "Device:R", ref: "R2", x: 63.5, y: 63.5 }), // pin 1 at (63.5, 59.69)
+      wire(50.8, 45.72, 76.2, 45.72),
+      wire(63.5, 45.72, 63.5, 59.69),
+      "(bus (pts (xy 60.96 30) (xy 60.96 43.18)))",
+      "(bus_entry (at 60.96 43.18) (size 2.54 2.54))",
+    ]));
+    expect(netOf(c, "R1", "1")).toBe(netOf(c, "R2", "1"));
+  });
+
+  it("unannotated references are numbered apart and noted", () => {
+    const c = read(schematic([
+      place({ lib: "Device:R", ref: "R?", x: 50.8, y: 50.8 }),
+      place({ lib: "Device:R", ref: "R?", x: 76.2, y: 50.8 }),
+    ]));
+    expect(c.parts.map((p) => p.ref)).toEqual(["R?1", "R?2"]);
+    expect(c.notes.filter((n) => n.message.includes("not annotated"))).toHaveLength(2);
+  });
+
+  it("a Value of ~ is empty before file version 20250318 and literal from it (§5, §13.3)", () => {
+    const body = [place({ lib: "Device:R", ref: "R1", value: "~", x: 50.8, y: 50.8 })];
+    expect(read(schematic(body, { version: 20250114 })).parts[0]?.value).toBe("");
+    expect(read(schematic(body, { version: 20250318 })).parts[0]?.value).toBe("~");
+  });
+
+  it("loads a model library named by Sim.Library inside the project; refuses one outside, notes a missing one", () => {
+    const sim = (lib: string) => `\n    (property "Sim.Library" "${lib}" (at 0 0 0)) (property "Sim.Name" "QX" (at 0 0 0))`;
+    const text = schematic([
+      place({ lib: "Device:R", ref: "R1", x: 50.8, y: 50.8, extra: sim("models/q.lib") }),
+      place({ lib: "Device:R", ref: "R2", x: 76.2, y: 50.8, extra: sim("../elsewhere/q.lib") }),
+      place({ lib: "Device:R", ref: "R3", x: 101.6, y: 50.8, extra: sim("${KIPRJMOD}/models/none.lib") }),
+    ], { version: 20231120 });
+    const c = readMemory({ [FILE]: text, "board/models/q.lib": ".model QX NPN(BF=200)\n", "elsewhere/q.lib": "secret" }, FILE);
+    expect(c.modelLibraries).toEqual([{ path: "models/q.lib", text: ".model QX NPN(BF=200)\n" }]);
+    const libNotes = c.notes.filter((n) => n.message.startsWith("model library")).map((n) => [n.ref, n.message]);
+    expect(libNotes).toEqual([
+      ["R2", 'model library "../elsewhere/q.lib" lies outside the project folder; not read'],
+      ["R3", 'model library "${KIPRJMOD}/models/none.lib" not read: no such file'],
+    ]);
+  });
+});

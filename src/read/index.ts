@@ -7,7 +7,7 @@ import { readNetlistTree } from "./kicad-net.js";
 import { describeFirstForm } from "./kicad-sch/extract-sheet.js";
 import { sheetPathFor } from "./kicad-sch/hierarchy.js";
 import { readSchematic } from "./kicad-sch/read-schematic.js";
-import { loadSheet, sheetFromTree } from "./kicad-sch/sheet-cache.js";
+import { loadSheet, sheetFromTree, type SheetResult } from "./kicad-sch/sheet-cache.js";
 import { loadTree, wholeFileError } from "./load-file.js";
 import { keywordOf, textOf, where } from "./sexpr.js";
 
@@ -26,26 +26,30 @@ export interface ReadOptions {
 export function readDesign(path: string, opts: ReadOptions = {}): ReadResult {
   const fs = opts.fs ?? nodeFileSource();
   try {
-    const loaded = loadTree(fs, path);
-    if (!loaded.ok) return loaded;
-    const first = loaded.tree.nodes[0];
-    const kw = keywordOf(first);
-    if (kw === "kicad_sch") {
-      const schematicOpts = { fs, tree: { tree: loaded.tree, real: loaded.real } };
-      return readSchematic(path, opts.projectRoot !== undefined ? { ...schematicOpts, projectRoot: opts.projectRoot } : schematicOpts);
-    }
-    if (kw === "export") {
-      return readNetlistTree(loaded.tree, path, fs, opts.projectRoot ?? dirname(path));
-    }
-    const p = first ? where(first) : { line: 1, column: 1 };
-    const legacy = textOf(first) === "EESchema" ? " (a KiCad 5 schematic: open and save it in KiCad 6 or later, or export a netlist)" : "";
-    return { ok: false, error: { file: path, line: p.line, column: p.column,
-      message: `not a KiCad schematic or netlist: expected "(kicad_sch" or "(export" at the start, found ${describeFirstForm(loaded.tree.nodes)}${legacy}` } };
+    const opened = openRoot(fs, path, opts.projectRoot ?? dirname(path));
+    if (opened.kind === "done") return opened.result;
+    return readSchematic(path, opts.projectRoot !== undefined ? { fs, root: opened.root, projectRoot: opts.projectRoot } : { fs, root: opened.root });
   } catch (err) {
     // Deep recursion anywhere below is bad input, not a bug worth a stack trace.
     if (err instanceof RangeError) return wholeFileError(path, `the design is too large or too deeply nested to read (${err.message})`);
     throw err;
   }
+}
+
+/** Parses the root file and either finishes (netlist, error) or hands back the extracted root
+ * sheet. Kept separate so the root's s-expression tree dies with this frame, before the rest of
+ * the hierarchy is read: peak memory then follows the largest sheet. */
+function openRoot(fs: FileSource, path: string, projectRoot: string): { kind: "done"; result: ReadResult } | { kind: "schematic"; root: SheetResult } {
+  const loaded = loadTree(fs, path);
+  if (!loaded.ok) return { kind: "done", result: loaded };
+  const first = loaded.tree.nodes[0];
+  const kw = keywordOf(first);
+  if (kw === "kicad_sch") return { kind: "schematic", root: sheetFromTree(fs, loaded.tree, path, loaded.real) };
+  if (kw === "export") return { kind: "done", result: readNetlistTree(loaded.tree, path, fs, projectRoot) };
+  const p = first ? where(first) : { line: 1, column: 1 };
+  const legacy = textOf(first) === "EESchema" ? " (a KiCad 5 schematic: open and save it in KiCad 6 or later, or export a netlist)" : "";
+  return { kind: "done", result: { ok: false, error: { file: path, line: p.line, column: p.column,
+    message: `not a KiCad schematic or netlist: expected "(kicad_sch" or "(export" at the start, found ${describeFirstForm(loaded.tree.nodes)}${legacy}` } } };
 }
 
 /**

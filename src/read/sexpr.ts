@@ -257,7 +257,7 @@ function scan(text: string, file: string, build: boolean): ScanResult {
       if (build) out += text.slice(chunk, j);
       i = j + 1;
       if (build) {
-        const node: StringNode = { type: "string", content: out, location: { start, end: here() } };
+        const node: StringNode = { type: "string", content: detach(out), location: { start, end: here() } };
         const parent = open[open.length - 1];
         (parent?.list ? parent.list.content : top).push(node);
       }
@@ -277,7 +277,7 @@ function scan(text: string, file: string, build: boolean): ScanResult {
     if (build) {
       const node: AtomNode = {
         type: "atom",
-        content: text.slice(start, j),
+        content: detach(text.slice(start, j)),
         location: { start: { offset: start, line, column }, end: here() },
       };
       const parent = open[open.length - 1];
@@ -291,6 +291,12 @@ function scan(text: string, file: string, build: boolean): ScanResult {
       `expected ')' to close the list opened at line ${unclosed.line}, column ${unclosed.column} (the file ends first)`);
   }
   return { ok: true, needsOwn, nodes: top };
+}
+
+/** A copy of a token's text that does not keep the whole file's text alive: V8 represents longer
+ * substrings as views into their parent, and the extracted sheet data outlives the file text. */
+function detach(s: string): string {
+  return s.length < 13 ? s : (" " + s).slice(1);
 }
 
 /** Decodes the escape at `text[j] === '\\'` as KiCad's lexer does; returns characters consumed. */

@@ -4,23 +4,22 @@ import type { Circuit, ReadNote, ReadResult } from "../../circuit/types.js";
 import type { FileSource } from "../file-source.js";
 import { wholeFileError } from "../load-file.js";
 import { loadModelLibraries } from "../model-libraries.js";
-import type { SexprTree } from "../sexpr.js";
 import { assemble } from "./assemble.js";
 import { buildDesignGraph } from "./design-graph.js";
 import { buildHierarchy, isInside } from "./hierarchy.js";
-import { loadSheet, sheetFromTree } from "./sheet-cache.js";
+import { loadSheet, type SheetResult } from "./sheet-cache.js";
 
 export interface SchematicReadOptions {
   fs: FileSource;
   /** Folder sheets and model libraries must stay inside; default: the root file's folder. */
   projectRoot?: string;
-  /** The root's tree when the caller has already parsed it (to tell schematic from netlist). */
-  tree?: { tree: SexprTree; real: string };
+  /** The root's extracted sheet when the caller has already read it (to tell schematic from netlist). */
+  root?: SheetResult;
 }
 
 export function readSchematic(file: string, opts: SchematicReadOptions): ReadResult {
   const { fs } = opts;
-  const rootResult = opts.tree ? sheetFromTree(fs, opts.tree.tree, file, opts.tree.real) : loadSheet(fs, file);
+  const rootResult = opts.root ?? loadSheet(fs, file);
   if (!rootResult.ok) return rootResult;
   const root = rootResult.sheet;
   const projectRoot = opts.projectRoot ?? dirname(file);
