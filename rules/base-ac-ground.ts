@@ -131,7 +131,7 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
   const part = c.stage.part;
   const caps = ctx.groundingCapacitors(c.net);
   const onRail = ctx.rail(c.net) !== undefined;
-  const device = ctx.device(c.ref);
+  const device = c.role === "G2" ? ctx.device(c.ref, "g2") : ctx.device(c.ref);
   const tol = device ? tolerance(ctx, device, k) : undefined;
   const series = ctx.config.series.capacitor;
   const low = ctx.band.low;
@@ -184,7 +184,8 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
     // Too little capacitance: size it for the lowest failing frequency, then confirm by solving.
     neededFarads = faradsForReactance(tol.limit(first.hertz), first.hertz);
     suggestion = suggestShuntCapacitor(ctx, {
-      net: c.net, frequencies: judgedHz, limit: tol.limit, aimHertz: first.hertz, like: largest?.ref, series, spanDecades: 0.5,
+      net: c.net, frequencies: judgedHz, limit: tol.limit, aimHertz: first.hertz, like: largest?.ref, series, spanDecades: 1,
+      replaces: largest ? [largest.ref] : [],
     }, ctx.snapUp(neededFarads, series));
   } else {
     // Inductive: the capacitors are past self-resonance; a smaller one resonating there fills in.
@@ -193,13 +194,23 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
     });
   }
   const range = failing.length === judged.length ? "across the whole band" : `from ${si(first.hertz, "Hz")} to ${si(last.hertz, "Hz")}`;
+  const action = capacitive
+    ? `${largest ? `fitting ${si(suggestion?.farads ?? 0, "F")} to ground instead of ${largest.ref}` : `adding ${si(suggestion?.farads ?? 0, "F")}`}`
+    : `adding ${si(suggestion?.farads ?? 0, "F")} like ${smallest?.ref ?? "the bypass"} (self-resonant at ${si(suggestion?.model.srfHertz ?? 0, "Hz")})`;
   const advice = suggestion
-    ? ` ${capacitive ? `About ${si(neededFarads ?? suggestion.farads, "F")} is needed; adding` : "Adding"} ${si(suggestion.farads, "F")} ${capacitive ? `(in parallel with ${largest?.ref ?? "the bypass"}, or replacing it)` : `like ${smallest?.ref ?? "the bypass"} (self-resonant at ${si(suggestion.model.srfHertz, "Hz")})`} ${suggestion.worstRatio <= 1 ? "holds the node under the limit across the band" : `brings the worst to ${si(suggestion.worstOhms, "Ω")} at ${si(suggestion.atHertz, "Hz")}, still over the limit`}.`
+    ? ` ${capacitive ? `About ${si(neededFarads ?? suggestion.farads, "F")} is needed; ` : ""}${action} ${suggestion.worstRatio <= 1 ? "holds the node under the limit across the band" : `brings the worst to ${si(suggestion.worstOhms, "Ω")} at ${si(suggestion.atHertz, "Hz")}, still over the limit`}.`
+    : "";
+  // A capacitor returned to a rail grounds the node only as well as that rail is bypassed.
+  const toRails = caps
+    .map((cap) => ({ cap, rail: Object.values(cap.pins).find((n) => n !== c.net && ctx.rail(n) !== undefined) }))
+    .filter((x): x is { cap: Part; rail: string } => x.rail !== undefined);
+  const railNote = toRails.length > 0
+    ? ` ${toRails.map((x) => `${x.cap.ref} returns to ${x.rail}`).join(", ")}: the node is only as well grounded as that rail is bypassed — bypass the rail, or return the capacitor to ground.`
     : "";
   return [finding(ctx, ID, {
     at: largest ?? part,
     severity: "warning",
-    message: `${c.ref} (${kind}): its ${c.what} (net ${c.net}) is not an AC ground ${range} within ${bandText(ctx)}: |Z| to ground is ${si(worst.magnitude, "Ω")} at ${si(worst.hertz, "Hz")} where the stage tolerates ${si(tol.limit(worst.hertz), "Ω")} (${tol.basis}).${advice}`,
+    message: `${c.ref} (${kind}): its ${c.what} (net ${c.net}) is not an AC ground ${range} within ${bandText(ctx)}: |Z| to ground is ${si(worst.magnitude, "Ω")} at ${si(worst.hertz, "Hz")} where the stage tolerates ${si(tol.limit(worst.hertz), "Ω")} (${tol.basis}).${railNote}${advice}`,
     parts: [c.ref, ...caps.map((p: Part) => p.ref)],
     nets: [c.net],
     data: {

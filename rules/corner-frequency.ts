@@ -131,7 +131,8 @@ function findCandidates(ctx: Context): Candidate[] {
   return out.sort((x, y) => byRef(x.cap, y.cap));
 }
 
-/** Connector pins on signal nets terminated in the port resistance, in solver nodes. */
+/** Connector pins on signal nets terminated in the port resistance, in solver nodes: a capacitor
+ * with that ESR, so the termination is there for signal and absent at DC (the bias stays put). */
 function portTerminations(ctx: Context, portOhms: number): Element[] {
   const out: Element[] = [];
   for (const part of ctx.circuit.parts) {
@@ -139,7 +140,7 @@ function portTerminations(ctx: Context, portOhms: number): Element[] {
     for (const [pin, net] of Object.entries(part.pins)) {
       if (ctx.isSupply(net)) continue;
       const node = ctx.nodeOf(net);
-      if (node !== undefined) out.push({ kind: "R", name: `Rport_${part.ref}_${pin}`, a: node, b: "0", ohms: portOhms });
+      if (node !== undefined) out.push({ kind: "C", name: `Cport_${part.ref}_${pin}`, a: node, b: "0", farads: 1, esr: portOhms });
     }
   }
   return out;
@@ -175,9 +176,17 @@ export const cornerFrequency: Rule<Context> = {
     const shortable = ctx.circuit.parts.filter((p) => !p.dnp && isCapacitor(p)).map((p) => p.ref);
     const candidateRefs = new Set(candidates.map((c) => c.cap.ref));
     const findings: Finding[] = [];
+    const unmodelled = new Set(ctx.unmodelled().map((u) => u.ref));
     for (const c of candidates) {
       const farads = c.cap.parsed.number;
       if (farads === undefined || !(farads > 0)) continue;
+      // Without its transistor in the analysis the resistance the capacitor sees would be wrong.
+      const missing = [c.device?.ref, ...ctx.devices().filter((d) => Object.values(d.pins).some((n) => n === c.a || n === c.b)).map((d) => d.ref)]
+        .filter((r): r is string => r !== undefined && unmodelled.has(r));
+      if (missing.length > 0) {
+        ctx.noteLimited(ID, `${c.cap.ref} not judged: ${[...new Set(missing)].join(", ")} not modelled`, [c.cap.ref, ...new Set(missing)]);
+        continue;
+      }
       const others = shortable.filter((ref) => ref !== c.cap.ref && (candidateRefs.has(ref) || isBypassOfSignalNode(ctx, ref)));
       const options = { passiveOnly: false, without: [c.cap.ref], shorted: others, extra: terminations };
       const points = c.role === "coupling"

@@ -39,7 +39,7 @@ import type { Context } from "../src/engine/context.js";
 import type { ComplexPoint, Rail } from "../src/engine/context-types.js";
 import type { Rule } from "../src/engine/rule.js";
 import type { Finding, RuleDoc } from "../src/engine/types.js";
-import { faradsForReactance, suggestShuntCapacitor } from "./bypass-search.js";
+import { faradsForReactance, refinePeak, suggestShuntCapacitor } from "./bypass-search.js";
 import type { CapacitorSuggestion } from "./bypass-search.js";
 import { bandText, byRef, finding, numberOption, si } from "./support.js";
 
@@ -85,14 +85,15 @@ interface Target {
 }
 
 function chooseTarget(ctx: Context, rail: Rail, configured: number, ratio: number): Target | undefined {
-  if (configured > 0) return { ohms: configured, basis: `configured targetOhms ${si(configured, "Ω")}`, isDefault: false };
+  if (configured > 0) return { ohms: configured, basis: `configured target ${si(configured, "Ω")}`, isDefault: false };
   const loads = ctx.railLoads(rail.net);
   if (loads.length === 0 || !(ratio > 0)) return undefined;
   const smallest = loads.reduce((a, b) => (b.ohms < a.ohms ? b : a));
   const what = smallest.part.kind === "inductor" ? `${smallest.part.ref}'s ${si(smallest.ohms, "Ω")} reactance at the band's low edge` : `${smallest.part.ref} ${si(smallest.ohms, "Ω")}`;
+  const ohms = smallest.ohms / ratio;
   return {
-    ohms: smallest.ohms / ratio,
-    basis: `default target: 1/${ratio} of the smallest collector/drain load fed from it (${what}, feeding ${smallest.device.ref})`,
+    ohms,
+    basis: `default target ${si(ohms, "Ω")} (1/${ratio} of the smallest collector/drain load fed from it, ${what} feeding ${smallest.device.ref})`,
     isDefault: true,
   };
 }
@@ -102,23 +103,36 @@ function inBand(ctx: Context, points: ComplexPoint[]): ComplexPoint[] {
   return points.filter((p) => p.hertz >= low * (1 - 1e-9) && p.hertz <= high * (1 + 1e-9));
 }
 
-/** Local maxima of |Z| (strictly above both neighbours, or a flat top's first point). */
-function peaks(points: ComplexPoint[]): ComplexPoint[] {
+/** Local maxima of |Z| on the grid (above both neighbours), each refined between its neighbours. */
+function peaks(ctx: Context, net: string, points: ComplexPoint[]): ComplexPoint[] {
   const out: ComplexPoint[] = [];
   for (let i = 1; i < points.length - 1; i++) {
     const prev = points[i - 1];
     const here = points[i];
-    let j = i + 1;
-    while (j < points.length - 1 && points[j]?.magnitude === here?.magnitude) j++;
-    const next = points[j];
-    if (prev && here && next && here.magnitude > prev.magnitude && here.magnitude > next.magnitude) out.push(here);
+    const next = points[i + 1];
+    if (!prev || !here || !next || !(here.magnitude > prev.magnitude && here.magnitude >= next.magnitude)) continue;
+    out.push(refinePeak(ctx, net, prev.hertz, next.hertz) ?? here);
   }
   return out;
 }
 
-function suggestionText(ctx: Context, s: CapacitorSuggestion | undefined, like: Part | undefined, target: number): string {
+/** The highest in-band point; an interior maximum is refined, since the grid may straddle it. */
+function refinedWorst(ctx: Context, net: string, judged: ComplexPoint[]): ComplexPoint | undefined {
+  let index = -1;
+  judged.forEach((p, i) => {
+    if (index < 0 || p.magnitude > (judged[index]?.magnitude ?? 0)) index = i;
+  });
+  const here = judged[index];
+  const prev = judged[index - 1];
+  const next = judged[index + 1];
+  if (!here || !prev || !next) return here;
+  const refined = refinePeak(ctx, net, prev.hertz, next.hertz);
+  return refined && refined.magnitude > here.magnitude ? refined : here;
+}
+
+function suggestionText(ctx: Context, s: CapacitorSuggestion | undefined, target: number): string {
   if (!s) return "";
-  const pkg = like ? ` like ${like.ref}` : " (0603 ceramic)";
+  const pkg = s.like ? ` like ${s.like}` : " (0603 ceramic)";
   const outcome = s.worstRatio <= 1
     ? `brings the worst in-band |Z| to ${si(s.worstOhms, "Ω")}, under the target`
     : `lowers the worst in-band |Z| to ${si(s.worstOhms, "Ω")} at ${si(s.atHertz, "Hz")}, still over ${si(target, "Ω")}; more than one part is needed`;
@@ -157,7 +171,7 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
     return findings;
   }
   const judged = inBand(ctx, points);
-  const worstPoint = judged.reduce<ComplexPoint | undefined>((a, b) => (!a || b.magnitude > a.magnitude ? b : a), undefined);
+  const worstPoint = refinedWorst(ctx, rail.net, judged);
   if (!target || !worstPoint) {
     if (!target && caps.length > 0) ctx.noteLimited(ID, `no target for rail ${rail.net}: no collector/drain load found on it (set targetOhms)`, []);
     return findings;
@@ -176,21 +190,30 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
   const models = caps
     .map((part) => ({ part, model: ctx.capacitor(part.ref) }))
     .filter((c): c is { part: Part; model: NonNullable<typeof c.model> } => c.model !== undefined);
-  const lowestEsl = models.reduce<(typeof models)[number] | undefined>((a, b) => (!a || b.model.esl < a.model.esl ? b : a), undefined);
+  // Templates for suggestions: an RF part copies the board's lowest-ESL ceramic (a generic 0603
+  // when there is none); a bulk part copies the largest capacitor.
+  const ceramics = models.filter((m) => m.part.kind === "capacitor");
+  const lowestEsl = ceramics.reduce<(typeof models)[number] | undefined>((a, b) => (!a || b.model.esl < a.model.esl ? b : a), undefined);
   const largest = models.reduce<(typeof models)[number] | undefined>((a, b) => (!a || b.model.farads > a.model.farads ? b : a), undefined);
+  const anchorCap = lowestEsl ?? largest;
   const series = ctx.config.series.capacitor;
   const judgedHz = judged.map((p) => p.hertz);
   const capParts = caps.map((c) => c.ref);
   const targetPhrase = `the ${target.basis}`;
 
-  // The summary: the worst point and the one part that best fills the gap there.
-  const summarySuggestion = suggestShuntCapacitor(ctx, {
-    net: rail.net, frequencies: judgedHz, limit, aimHertz: worstPoint.hertz, like: lowestEsl?.part.ref, series,
-  });
+  // The summary: the worst point and the one part that best fills the gap there — sized by its
+  // reactance where the rail is still capacitive (too little capacitance), by its self-resonance
+  // where the rail has turned inductive (the capacitors are past resonance).
+  const capacitiveWorst = worstPoint.im < 0;
+  const summaryLike = capacitiveWorst ? largest?.part : lowestEsl?.part;
+  const summarySuggestion = capacitiveWorst
+    ? suggestShuntCapacitor(ctx, { net: rail.net, frequencies: judgedHz, limit, aimHertz: worstPoint.hertz, like: summaryLike?.ref, alsoLike: [undefined], series },
+        ctx.snapUp(faradsForReactance(target.ohms, worstPoint.hertz), series))
+    : suggestShuntCapacitor(ctx, { net: rail.net, frequencies: judgedHz, limit, aimHertz: worstPoint.hertz, like: summaryLike?.ref, series });
   findings.push(finding(ctx, ID, {
-    at: lowestEsl?.part ?? anchor,
+    at: anchorCap?.part ?? anchor,
     severity: "warning",
-    message: `Rail ${rail.net}: |Z| to ground reaches ${si(worstPoint.magnitude, "Ω")} at ${si(worstPoint.hertz, "Hz")}, over ${targetPhrase} = ${si(target.ohms, "Ω")}, within ${bandText(ctx)}.${suggestionText(ctx, summarySuggestion, lowestEsl?.part, target.ohms)}`,
+    message: `Rail ${rail.net}: |Z| to ground reaches ${si(worstPoint.magnitude, "Ω")} at ${si(worstPoint.hertz, "Hz")}, over ${targetPhrase}, within ${bandText(ctx)}.${suggestionText(ctx, summarySuggestion, target.ohms)}`,
     parts: capParts,
     nets: [rail.net],
     data: {
@@ -201,7 +224,7 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
 
   // Anti-resonances: a peak between two capacitors' self-resonances, over the target, in band.
   const srfs = models.map((m) => ({ part: m.part, srf: m.model.srfHertz, farads: m.model.farads }));
-  for (const peak of peaks(points)) {
+  for (const peak of peaks(ctx, rail.net, points)) {
     if (peak.magnitude <= target.ohms) continue;
     if (peak.hertz < ctx.band.low * (1 - 1e-9) || peak.hertz > ctx.band.high * (1 + 1e-9)) continue;
     const below = srfs.filter((s) => s.srf < peak.hertz).reduce<(typeof srfs)[number] | undefined>((a, b) => (!a || b.srf > a.srf ? b : a), undefined);
@@ -213,7 +236,7 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
     findings.push(finding(ctx, ID, {
       at: above.part,
       severity: "warning",
-      message: `Rail ${rail.net}: ${below.part.ref} (${si(below.farads, "F")}, self-resonant at ${si(below.srf, "Hz")}) and ${above.part.ref} (${si(above.farads, "F")}, ${si(above.srf, "Hz")}) anti-resonate: |Z| peaks at ${si(peak.magnitude, "Ω")} at ${si(peak.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}.${suggestionText(ctx, fill, above.part, target.ohms)}`,
+      message: `Rail ${rail.net}: ${below.part.ref} (${si(below.farads, "F")}, self-resonant at ${si(below.srf, "Hz")}) and ${above.part.ref} (${si(above.farads, "F")}, ${si(above.srf, "Hz")}) anti-resonate: |Z| peaks at ${si(peak.magnitude, "Ω")} at ${si(peak.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}.${suggestionText(ctx, fill, target.ohms)}`,
       parts: [below.part.ref, above.part.ref],
       nets: [rail.net],
       data: {
@@ -228,12 +251,12 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
   if (lowEdge && lowEdge.magnitude > target.ohms && -lowEdge.im > target.ohms) {
     const neededFarads = faradsForReactance(target.ohms, lowEdge.hertz);
     const bulk = suggestShuntCapacitor(ctx, {
-      net: rail.net, frequencies: judgedHz, limit, aimHertz: lowEdge.hertz, like: largest?.part.ref, series, spanDecades: 0.5,
+      net: rail.net, frequencies: judgedHz, limit, aimHertz: lowEdge.hertz, like: largest?.part.ref, alsoLike: [undefined], series, spanDecades: 1,
     }, ctx.snapUp(neededFarads, series));
     findings.push(finding(ctx, ID, {
       at: largest?.part ?? anchor,
       severity: "warning",
-      message: `Rail ${rail.net}: no bulk capacitance for the low end — |Z| is ${si(lowEdge.magnitude, "Ω")} (capacitive) at the band's low edge ${si(lowEdge.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}; at least ${si(neededFarads, "F")} is needed there.${suggestionText(ctx, bulk, largest?.part, target.ohms)}`,
+      message: `Rail ${rail.net}: no bulk capacitance for the low end — |Z| is ${si(lowEdge.magnitude, "Ω")} (capacitive) at the band's low edge ${si(lowEdge.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}; at least ${si(neededFarads, "F")} is needed there.${suggestionText(ctx, bulk, target.ohms)}`,
       parts: capParts,
       nets: [rail.net],
       data: { lowEdgeOhms: lowEdge.magnitude, atHertz: lowEdge.hertz, targetOhms: target.ohms, neededFarads, ...suggestionData(bulk) },
@@ -248,9 +271,9 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
       net: rail.net, frequencies: judgedHz, limit, aimHertz: ctx.band.high, like: lowestEsl?.part.ref, series,
     });
     findings.push(finding(ctx, ID, {
-      at: lowestEsl?.part ?? anchor,
+      at: anchorCap?.part ?? anchor,
       severity: "warning",
-      message: `Rail ${rail.net}: no RF capacitor for the top of the band — every bypass capacitor is self-resonant below ${si(ctx.band.high, "Hz")} (highest ${si(highestSrf, "Hz")}), so the rail is inductive there: ${si(highEdge.magnitude, "Ω")} at ${si(highEdge.hertz, "Hz")} against the target ${si(target.ohms, "Ω")}.${suggestionText(ctx, rf, lowestEsl?.part, target.ohms)}`,
+      message: `Rail ${rail.net}: no RF capacitor for the top of the band — every bypass capacitor is self-resonant below ${si(ctx.band.high, "Hz")} (highest ${si(highestSrf, "Hz")}), so the rail is inductive there: ${si(highEdge.magnitude, "Ω")} at ${si(highEdge.hertz, "Hz")} against the target ${si(target.ohms, "Ω")}.${suggestionText(ctx, rf, target.ohms)}`,
       parts: capParts,
       nets: [rail.net],
       data: { highEdgeOhms: highEdge.magnitude, atHertz: highEdge.hertz, targetOhms: target.ohms, highestSrfHertz: highestSrf, ...suggestionData(rf) },

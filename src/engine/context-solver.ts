@@ -2,11 +2,11 @@
 // solver's functions to what the Context offers, so a change in the solver's signatures is absorbed
 // here. Types are re-exported so rule files import them from the engine, not from the solver.
 //
-// INTERIM: src/solve/from-circuit.ts is being written in parallel; until it lands `buildSolver`
-// reports "solver not available" and every analysis that needs the netlist says so.
 import type { Circuit, Part } from "../circuit/types.js";
 import type { SolverCircuit } from "../solve/netlist.js";
 import type { ComplexPoint } from "./context-types.js";
+import { buildSolverCircuit } from "../solve/from-circuit.js";
+import type { BuildNote, PartRatings } from "../solve/from-circuit.js";
 import type { OperatingPoint } from "../solve/types.js";
 import { acSweep, impedanceToGround, solveOperatingPoint, THERMAL_VOLTAGE } from "../solve/index.js";
 import { E_SERIES } from "../solve/eseries.js";
@@ -15,19 +15,7 @@ import { estimateCapacitorParasitics, selfResonantFrequency } from "../solve/par
 
 export type { BjtOperatingPoint, DeviceOperatingPoint, DiodeOperatingPoint, JfetOperatingPoint, MosfetOperatingPoint, OperatingPoint } from "../solve/types.js";
 
-/** Absolute maximum ratings of a part, SI units; any may be absent. */
-export interface PartRatings {
-  vceo?: number;
-  vcbo?: number;
-  vebo?: number;
-  icMax?: number;
-  vdsMax?: number;
-  vgsMax?: number;
-  idMax?: number;
-  powerMax?: number;
-  voltageMax?: number;
-  source?: string;
-}
+export type { PartRatings } from "../solve/from-circuit.js";
 
 export interface Unmodelled {
   ref: string;
@@ -37,9 +25,9 @@ export interface Unmodelled {
 export interface SolverBuild {
   solver: SolverCircuit;
   /** Observations made while building (assumed ESR, default model used, …). */
-  notes: string[];
+  notes: BuildNote[];
   unmodelled: Unmodelled[];
-  /** Circuit net name -> solver node name. */
+  /** Circuit net name -> solver node name ("0" for ground). */
   nodeOfNet: Record<string, string>;
   ratings: Record<string, PartRatings>;
 }
@@ -56,10 +44,23 @@ export interface CapacitorModel {
   source: string;
 }
 
-const NOT_YET = "the circuit solver is not available in this build";
-
-export function buildSolver(_circuit: Circuit, _railVolts: Record<string, number>, _modelsText?: string): Built {
-  return { ok: false, problem: NOT_YET };
+/** The solver netlist of a circuit, with the reason each unmodelled part was left out. */
+export function buildSolver(circuit: Circuit, railVolts: Record<string, number>, modelsText?: string): Built {
+  const result = buildSolverCircuit(circuit, modelsText === undefined ? { railVolts } : { railVolts, modelsText });
+  const reasonOf = (ref: string): string => {
+    const note = result.notes.find((n) => n.ref === ref && /is not simulated/.test(n.message));
+    return note ? note.message.replace(/^.*? is not simulated: /, "") : "not simulated";
+  };
+  return {
+    ok: true,
+    build: {
+      solver: result.solver,
+      notes: result.notes,
+      unmodelled: result.unmodelled.map((ref) => ({ ref, reason: reasonOf(ref) })),
+      nodeOfNet: result.nodeOfNet,
+      ratings: result.ratings,
+    },
+  };
 }
 
 export function solveDc(solver: SolverCircuit): OperatingPoint {

@@ -3,6 +3,7 @@
 // operating point of Q3", "which stage is common-base"), and the figures come from src/solve.
 import type { Circuit, Part } from "../circuit/types.js";
 import type { Element, SolverCircuit } from "../solve/netlist.js";
+import { diagnoseTopology } from "../solve/index.js";
 import type { Config, ESeriesName } from "./config.js";
 import type { BandOfOperation, BiasThevenin, ComplexPoint, Rail, Stack, Stage } from "./context-types.js";
 import type { BaseReport, DeviceReport, RailReport } from "./result.js";
@@ -13,12 +14,15 @@ import {
   pathToSupply, terminalsOf,
 } from "./context-topology.js";
 import type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
+import type { PowerRating, SaturationEdge } from "./context-limits.js";
+import { cardOf, partDissipation, resistorPowerRating, saturationEdge } from "./context-limits.js";
 import {
   buildSolver, capacitorModel, impedanceAt, impedanceBetweenAt, seriesDecade, solveDc, thermalVoltage, transferAt,
 } from "./context-solver.js";
 
 export type { PartOnNet, SupplyPath } from "./context-topology.js";
 export type { CapacitorModel, DeviceOperatingPoint, OperatingPoint, PartRatings, SolverBuild, Unmodelled } from "./context-solver.js";
+export type { PowerRating, SaturationEdge } from "./context-limits.js";
 
 /** A collector/drain load fed from a rail: the part, the device it feeds, and its size in ohms. */
 export interface RailLoad {
@@ -116,10 +120,19 @@ export interface Context {
   operatingPointWith(overrides: Record<string, number>): OperatingPoint | undefined;
   /** A node's DC voltage from the operating point. */
   voltage(net: string): number | undefined;
-  /** One device's operating point. */
-  device(ref: string): DeviceOperatingPoint | undefined;
+  /** One device's operating point. A dual-gate MOSFET is two channels in series: `channel` "g1"
+   * (the default, at the source) or "g2" (at the drain). */
+  device(ref: string, channel?: "g1" | "g2"): DeviceOperatingPoint | undefined;
   /** A part's absolute maximum ratings from the model library or its fields. */
   rating(ref: string): PartRatings | undefined;
+  /** Where a device's headroom ends at its operating point: VCE(sat) (its rating, else 0.2 V [CP]) or
+   * VDS(sat) = VGS − VTO (JFET) / VGS − VTH (MOSFET). `channel` as for `device`. */
+  saturationEdge(ref: string, channel?: "g1" | "g2"): SaturationEdge | undefined;
+  /** DC watts a resistor (V²/R) or a device takes at the operating point. */
+  dissipation(ref: string): number | undefined;
+  /** A resistor's power rating: its own (Value, Power field), else by footprint size [CP], else
+   * `fallbackWatts` marked as assumed. */
+  resistorPowerRating(ref: string, fallbackWatts: number): PowerRating | undefined;
   /** Parts the solver could not model, with why. */
   unmodelled(): Unmodelled[];
 
@@ -239,10 +252,18 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
     const modelsText = [...circuit.modelLibraries.map((m) => m.text), ...(extras.modelsText ? [extras.modelsText] : [])].join("\n");
     return buildSolver(circuit, railVolts, modelsText === "" ? undefined : modelsText);
   });
-  const solverBuild = (): SolverBuild | undefined => {
+  // Nodes with no DC path (an input connector's node behind its coupling capacitor: the connector
+  // itself is not simulated) get a 1 GΩ leak to ground, as the ngspice reference decks do, so the
+  // operating point exists; the build's notes say which.
+  const leaked = lazy((): SolverBuild | undefined => {
     const b = built();
-    return b.ok ? b.build : undefined;
-  };
+    if (!b.ok) return undefined;
+    const { circuit: solver, nodes } = withDcLeaks(b.build.solver);
+    const notes = nodes.length === 0 ? b.build.notes
+      : [...b.build.notes, { message: `no DC path at ${nodes.join(", ")}: held at ground through 1 GΩ for the operating point` }];
+    return { ...b.build, solver, notes };
+  });
+  const solverBuild = (): SolverBuild | undefined => leaked();
 
   const op = lazy((): { op?: OperatingPoint; problem?: string } => {
     const build = solverBuild();
@@ -345,8 +366,28 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
       const node = build.nodeOfNet[net];
       return node === undefined ? undefined : point.nodeVoltages[node];
     },
-    device: (ref) => op().op?.devices[ref],
+    device(ref, channel) {
+      const devices = op().op?.devices;
+      if (!devices) return undefined;
+      if (channel !== undefined) return devices[`${ref}.${channel}`];
+      return devices[ref] ?? devices[`${ref}.g1`];
+    },
     rating: (ref) => solverBuild()?.ratings[ref],
+    saturationEdge(ref, channel) {
+      const device = ctx.device(ref, channel);
+      if (!device) return undefined;
+      const name = channel !== undefined ? `${ref}.${channel}` : op().op?.devices[ref] ? ref : `${ref}.g1`;
+      return saturationEdge(device, cardOf(solverBuild()?.solver.elements ?? [], name), ctx.rating(ref));
+    },
+    dissipation(ref) {
+      const part = index.part(ref);
+      const point = op().op;
+      return part && point ? partDissipation(part, point, (net) => ctx.voltage(net)) : undefined;
+    },
+    resistorPowerRating(ref, fallbackWatts) {
+      const part = index.part(ref);
+      return part?.kind === "resistor" ? resistorPowerRating(part, fallbackWatts) : undefined;
+    },
     unmodelled: () => solverBuild()?.unmodelled ?? [],
 
     impedance(net, frequencies, options) {
@@ -423,6 +464,9 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
   function whatIf(options: ImpedanceOptions, frequencies: readonly number[]): SolverCircuit | undefined {
     const base = options.passiveOnly ? acNetwork() : solverBuild()?.solver;
     if (!base) return undefined;
+    const nothingChanged = !options.without?.length && !options.shorted?.length && !options.extra?.length;
+    // The unchanged network is the very object the operating point was solved for: no re-solve.
+    if (nothingChanged) return base;
     const without = new Set(options.without ?? []);
     const shorted = new Set(options.shorted ?? []);
     const lowest = Math.min(...frequencies);
@@ -436,7 +480,10 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
       else elements.push(e);
     }
     elements.push(...(options.extra ?? []));
-    return { title: base.title, elements };
+    const changed: SolverCircuit = { title: base.title, elements };
+    // Taking a part out can leave a node with no DC path; the small-signal analysis re-solves the
+    // operating point of the changed network, so it needs the same leaks.
+    return options.passiveOnly ? changed : withDcLeaks(changed).circuit;
   }
 
   /** Thevenin by two DC solves of the network with the transistors taken out: open-circuit voltage,
@@ -491,6 +538,14 @@ function loadOhms(part: Part, lowHertz: number): number | undefined {
   if (part.kind === "resistor") return value;
   if (part.kind === "inductor") return 2 * Math.PI * lowHertz * value;
   return undefined;
+}
+
+/** The circuit with a 1 GΩ leak to ground on every node that has no DC path (see diagnoseTopology). */
+function withDcLeaks(circuit: SolverCircuit): { circuit: SolverCircuit; nodes: string[] } {
+  const nodes = [...new Set(diagnoseTopology(circuit).filter((p) => p.kind === "no-dc-path").flatMap((p) => p.nodes))].filter((n) => n !== "0");
+  if (nodes.length === 0) return { circuit, nodes };
+  const leaks: Element[] = nodes.map((n) => ({ kind: "R", name: `Rleak_${n}`, a: n, b: "0", ohms: 1e9 }));
+  return { circuit: { title: circuit.title, elements: [...circuit.elements, ...leaks] }, nodes };
 }
 
 /** A capacitor part like `template` (same footprint, fields, kind) but of another value. */
