@@ -89,7 +89,7 @@ class DcSolver {
     const info = this.elaborated.unknowns.info;
     for (let iter = 0; iter < run.limit; iter++) {
       if (this.totalIterations >= this.maxIterations) return { ok: false, iterations: iter, reason: "iteration-cap" };
-      if (Date.now() > this.deadline) return { ok: false, iterations: iter, reason: "deadline" };
+      if (Date.now() >= this.deadline) return { ok: false, iterations: iter, reason: "deadline" };
       this.totalIterations++;
       this.load(this.x, iter === 0 ? run.firstMode : "normal", run.srcFactor, run.diagGmin);
       const limited = this.ctx.limited;
