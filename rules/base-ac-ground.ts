@@ -138,7 +138,9 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
   const kind = c.stage.configuration === "unknown" ? "stage" : `${c.stage.configuration} stage`;
 
   if (!tol) {
-    const why = device ? `no usable small-signal figures for ${c.ref}` : `no operating point for ${c.ref} (${ctx.operatingPointProblem() ?? ctx.unmodelled().find((u) => u.ref === c.ref)?.reason ?? "not modelled"})`;
+    const unmodelled = ctx.unmodelled().some((u) => u.ref === c.ref);
+    const why = device ? `no usable small-signal figures for ${c.ref}`
+      : unmodelled ? `${c.ref} not modelled` : `no operating point for ${c.ref} (${ctx.operatingPointProblem() ?? "not solved"})`;
     ctx.noteLimited(ID, `${why}: the ${c.what} impedance limit could not be computed`, [c.ref]);
   }
 
