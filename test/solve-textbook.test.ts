@@ -5,7 +5,7 @@
 // and VT = 26 mV, so they are compared at 1–2 %; [CALC] and [SIM] figures much tighter.
 
 import { describe, expect, it } from "vitest";
-import { impedanceToGround, logSpace, solveOperatingPoint } from "../src/solve/index.js";
+import { impedanceBetween, impedanceToGround, logSpace, solveOperatingPoint } from "../src/solve/index.js";
 import type { BjtOperatingPoint, JfetOperatingPoint, OperatingPoint } from "../src/solve/index.js";
 import type { Element, ModelCard, SolverCircuit } from "../src/solve/netlist.js";
 
@@ -198,5 +198,25 @@ describe("Capacitor impedance models (reference-data 2.1 and 2.4)", () => {
     const peak = fine.reduce((a, b) => (b.mag > a.mag ? b : a));
     within(peak.mag, 0.8894, 5e-4);
     within(peak.f, 52.71e6, 1e-3);
+  });
+
+  it("impedance between two nodes: a floating 100 nF part with 1 MΩ from each end to ground is Zc ∥ 2 MΩ [CALC]", () => {
+    const circuit: SolverCircuit = {
+      title: "floating capacitor",
+      elements: [
+        { kind: "C", name: "C1", a: "p", b: "q", farads: 100e-9, esr: 0.05, esl: 1e-9 },
+        { kind: "R", name: "RP", a: "p", b: "0", ohms: 1e6 },
+        { kind: "R", name: "RQ", a: "q", b: "0", ohms: 1e6 },
+      ],
+    };
+    for (const f of [10, 1e3, 1e6]) {
+      const w = 2 * Math.PI * f;
+      const zcRe = 0.05, zcIm = w * 1e-9 - 1 / (w * 100e-9);
+      // (Zc · 2M) / (Zc + 2M)
+      const nr = zcRe * 2e6, ni = zcIm * 2e6, dr = zcRe + 2e6, di = zcIm;
+      const expected = Math.hypot(nr, ni) / Math.hypot(dr, di);
+      const [z] = impedanceBetween(circuit, null, "p", "q", [f], { passiveOnly: true });
+      within(z?.mag ?? NaN, expected, 1e-6);
+    }
   });
 });

@@ -59,6 +59,7 @@ export function acSweep(
   const { unknowns, devices } = lin;
 
   let injectAt: Unknown = GROUND;
+  let returnAt: Unknown = GROUND;
   let excitedSource: string | null = null;
   if (excitation.kind === "source") {
     const source = circuit.elements.find((el) => el.name === excitation.name);
@@ -70,8 +71,11 @@ export function acSweep(
   } else {
     const node = unknowns.lookup(excitation.node);
     if (node === undefined) return failedResult(frequencies, `there is no node named ${excitation.node}`);
-    if (node === GROUND) return failedResult(frequencies, "a test current into ground measures nothing; choose another node");
+    const back = excitation.returnNode === undefined ? GROUND : unknowns.lookup(excitation.returnNode);
+    if (back === undefined) return failedResult(frequencies, `there is no node named ${excitation.returnNode ?? ""}`);
+    if (node === back) return failedResult(frequencies, "a test current into and out of the same node measures nothing; choose two different nodes");
     injectAt = node;
+    returnAt = back;
   }
 
   const n = unknowns.size;
@@ -99,7 +103,10 @@ export function acSweep(
         if (info.kind !== "branch") system.add(i, i, PASSIVE_SHUNT, 0);
       });
     }
-    if (injectAt !== GROUND) system.addRhs(injectAt, 1, 0);
+    if (excitation.kind === "current") {
+      system.addRhs(injectAt, 1, 0);
+      system.addRhs(returnAt, -1, 0);
+    }
     const solved = system.solve(xr, xi);
     if (!solved.ok) {
       problem ??= `the small-signal matrix is singular at ${unknowns.describe(solved.singularUnknown)} (${f} Hz)`;
@@ -144,6 +151,29 @@ export function impedanceToGround(
   const v = ac.nodeVoltages[node] ?? nanSeries(frequencies.length);
   return frequencies.map((f, k) => {
     const re = v.re[k] as number, im = v.im[k] as number;
+    return { f, mag: Math.hypot(re, im), phaseDeg: phaseDeg(re, im), re, im };
+  });
+}
+
+/**
+ * Impedance between nodes `a` and `b`: 1 A is driven into `a` and out of `b`, and V(a) − V(b)
+ * read. Same options and NaN convention as impedanceToGround.
+ */
+export function impedanceBetween(
+  circuit: SolverCircuit,
+  op: OperatingPoint | null,
+  a: string,
+  b: string,
+  frequencies: number[],
+  opts: AcOptions = {},
+): ImpedancePoint[] {
+  if (b === "0") return impedanceToGround(circuit, op, a, frequencies, opts);
+  const ac = acSweep(circuit, op, frequencies, { kind: "current", node: a, returnNode: b }, opts);
+  const zero = { re: new Float64Array(frequencies.length), im: new Float64Array(frequencies.length) };
+  const va = a === "0" ? zero : (ac.nodeVoltages[a] ?? nanSeries(frequencies.length));
+  const vb = ac.nodeVoltages[b] ?? nanSeries(frequencies.length);
+  return frequencies.map((f, k) => {
+    const re = (va.re[k] as number) - (vb.re[k] as number), im = (va.im[k] as number) - (vb.im[k] as number);
     return { f, mag: Math.hypot(re, im), phaseDeg: phaseDeg(re, im), re, im };
   });
 }

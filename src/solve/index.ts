@@ -1,7 +1,7 @@
 // Public API of the circuit solver.
 
 export { solveOperatingPoint, type DcOptions } from "./dc.js";
-export { acSweep, findCorner, impedanceToGround, logSpace, transfer, type AcOptions } from "./ac.js";
+export { acSweep, findCorner, impedanceBetween, impedanceToGround, logSpace, transfer, type AcOptions } from "./ac.js";
 export { diagnoseTopology, type TopologyProblem, type TopologyProblemKind } from "./diagnose.js";
 export { seriesRlcAdmittance } from "./models/passive.js";
 export { BJT_IGNORED, BJT_PARAMS } from "./models/bjt.js";

@@ -116,7 +116,11 @@ export interface ComplexSeries {
   im: Float64Array;
 }
 
-export type AcExcitation = { kind: "source"; name: string } | { kind: "current"; node: string };
+/**
+ * What drives an AC sweep: one independent source at unit amplitude, or a 1 A test current
+ * into `node` (returning through `returnNode`, ground when omitted).
+ */
+export type AcExcitation = { kind: "source"; name: string } | { kind: "current"; node: string; returnNode?: string };
 
 export interface AcResult {
   frequencies: number[];
