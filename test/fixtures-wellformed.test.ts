@@ -7,10 +7,12 @@
 //   where it placed 5,290 of 5,497 pins on a wire end, label, junction, flag or pin; the rest were
 //   hidden power_in pins) equal the points the writer reports, and each lands on a wire end, label,
 //   junction, no-connect flag or another pin — the validation the notes' §0 describes.
-import { readdirSync, readFileSync, statSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { join, relative } from "node:path";
 import sexpr, { type Node } from "sexpr-plus";
 import { describe, expect, it } from "vitest";
+import { buildBenchDesign, generateProject, planStages } from "../bench/gen-project.js";
 import { BOARDS } from "../fixtures/gen/boards/index.js";
 import { render } from "../fixtures/gen/render.js";
 import { pinPoint } from "../fixtures/gen/transform.js";
@@ -243,5 +245,58 @@ describe("fixture geometry (independent of the writer's transform)", () => {
   it("the fixtures cover KiCad 6, 7, 8 and 9 file versions", () => {
     const versions = new Set(schematics.map((f) => arg(child(parseFile(f), "version"), 0)));
     expect([...versions].sort()).toEqual(["20211123", "20230121", "20231120", "20250114"]);
+  });
+});
+
+describe("benchmark project generator", () => {
+  const opts = { sheets: 6, targetBytes: 250_000 };
+
+  it("draws its stages correctly (the generator's geometric self-check passes)", () => {
+    const { perFile } = planStages(opts);
+    expect(() => render(buildBenchDesign(opts, perFile))).not.toThrow();
+  });
+
+  it("writes a parseable three-level project of at least the target size, the same bytes every time", () => {
+    const dir = mkdtempSync(join(tmpdir(), "loadline-bench-"));
+    try {
+      const a = generateProject(join(dir, "a"), opts);
+      const b = generateProject(join(dir, "b"), opts);
+      expect(a.bytes).toBeGreaterThanOrEqual(opts.targetBytes);
+      expect(b.bytes).toBe(a.bytes);
+      const names = readdirSync(join(dir, "a")).sort();
+      expect(names.length).toBe(opts.sheets + 1);
+      let maxDepth = 0;
+      for (const name of names) {
+        const textA = readFileSync(join(dir, "a", name), "utf8");
+        expect(readFileSync(join(dir, "b", name), "utf8")).toBe(textA);
+        const top = parseFile(join(dir, "a", name));
+        expect(head(top)).toBe("kicad_sch");
+        const geo = sheetGeometry(top);
+        const counts = new Map<string, number>();
+        for (const p of geo.pinPoints) counts.set(p.at, (counts.get(p.at) ?? 0) + 1);
+        for (const p of geo.pinPoints) if (p.landsRequired) expect(geo.targets.has(p.at) || (counts.get(p.at) ?? 0) > 1).toBe(true);
+        for (const sym of children(top, "symbol")) {
+          for (const path of children(descend(sym, "instances", "project") as List, "path")) {
+            maxDepth = Math.max(maxDepth, arg(path, 0).split("/").length - 1);
+          }
+        }
+      }
+      // Root UUID + level-1 sheet + leaf sheet: symbols on leaf sheets carry three-element paths.
+      expect(maxDepth).toBe(3);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it("writes one flat file with singleSheet", () => {
+    const dir = mkdtempSync(join(tmpdir(), "loadline-bench-"));
+    try {
+      const r = generateProject(dir, { sheets: 1, targetBytes: 120_000, singleSheet: true });
+      expect(readdirSync(dir)).toEqual(["bench-project.kicad_sch"]);
+      expect(r.bytes).toBeGreaterThanOrEqual(120_000);
+      expect(children(parseFile(r.root), "sheet").length).toBe(0);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
