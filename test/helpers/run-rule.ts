@@ -1,0 +1,31 @@
+// Runs one rule over a board through the real lint() core (reader, config lookup, Context, runner),
+// from the fixture folder or from files held in memory, and returns its findings.
+import { lint } from "../../src/engine/lint.js";
+import { memoryPathLister } from "../../src/engine/expand.js";
+import type { Context } from "../../src/engine/context.js";
+import type { Rule } from "../../src/engine/rule.js";
+import type { Finding } from "../../src/engine/types.js";
+import { memoryFileSource } from "../../src/read/index.js";
+
+function only(result: ReturnType<typeof lint>, what: string): Finding[] {
+  const problems = [...(result.errors ?? []), ...result.designs.flatMap((d) => d.errors)];
+  if (problems.length > 0) throw new Error(`${what}: ${JSON.stringify(problems)}`);
+  const design = result.designs[0];
+  if (!design || result.designs.length !== 1) throw new Error(`${what}: expected one design, got ${result.designs.length}`);
+  return design.findings;
+}
+
+/** The rule's findings on a board file on disk (its loadline.json, if any, found beside it). */
+export function ruleFindings(rule: Rule<Context>, board: string): Finding[] {
+  return only(lint({ paths: [board], rules: [rule] }), board);
+}
+
+/** The rule's findings on a design held in memory: `files` maps absolute paths to text. */
+export function ruleFindingsInMemory(rule: Rule<Context>, files: Record<string, string>, board: string): Finding[] {
+  return only(lint({ paths: [board], fs: memoryFileSource(files), lister: memoryPathLister(Object.keys(files)), rules: [rule] }), board);
+}
+
+/** Relative difference |a − b| / |b|. */
+export function rel(a: number, b: number): number {
+  return Math.abs(a - b) / Math.abs(b);
+}
