@@ -86,3 +86,33 @@ describe("frequency grid", () => {
     expect(f).toContain(30e6);
   });
 });
+
+// operatingPointWith (what the e-series rule uses) against the ngspice 39 runs of the Neamen cascode
+// design (reference-data §5(c): exact 51k/25k/14k, RE 700, RC 3.3k vs the E24 set 51k/24k/15k, 680).
+describe("operatingPointWith: re-solving with resistors changed", () => {
+  it("moves VCE2 and IC1 as ngspice shows for E24 snapping (2N3904 GP card)", async () => {
+    const { kicadNetlist } = await import("../fixtures/rules/netlist-writer.js");
+    const { readDesign, memoryFileSource } = await import("../src/read/index.js");
+    const text = kicadNetlist("neamen", [
+      "R1 +9V b2 51k", "R2 b2 b1 25k", "R3 b1 GND 14k", "Q1 c1 b1 e1 2N3904", "R4 e1 GND 700",
+      "Q2 c2 b2 c1 2N3904", "R5 +9V c2 3.3k",
+    ]);
+    const read = readDesign("/n/neamen.net", { fs: memoryFileSource({ "/n/neamen.net": text }) });
+    if (!read.ok) throw new Error(read.error.message);
+    const ctx = createContext(read.circuit, defaultConfig());
+    const vce = (op: ReturnType<typeof ctx.operatingPoint>, ref: string): number => {
+      const d = op?.devices[ref];
+      return d?.kind === "bjt" ? d.vce : NaN;
+    };
+    const exact = ctx.operatingPoint();
+    expect(Math.abs(vce(exact, "Q2") / 3.1176 - 1)).toBeLessThan(0.01); // [SIM] exact set, 2N3904 GP
+    const e24 = ctx.operatingPointWith({ R2: 24e3, R3: 15e3, R4: 680 });
+    expect(Math.abs(vce(e24, "Q2") / 2.7299 - 1)).toBeLessThan(0.01); // [SIM] E24 set
+    expect(Math.abs(vce(e24, "Q1") / 2.3309 - 1)).toBeLessThan(0.01);
+    const q1 = e24?.devices.Q1;
+    expect(q1?.kind === "bjt" ? q1.ic : NaN).toBeGreaterThan(0.9945e-3 * 0.99);
+    expect(q1?.kind === "bjt" ? q1.ic : NaN).toBeLessThan(0.9945e-3 * 1.01);
+    // Cached: the same overrides give the same object back.
+    expect(ctx.operatingPointWith({ R4: 680, R3: 15e3, R2: 24e3 })).toBe(e24);
+  });
+});
