@@ -30,7 +30,7 @@ const ID = "model-coverage";
 
 const doc: RuleDoc = {
   what:
-    "Lists, as one note per design, the parts the solver could not model (no model for a part number, an unreadable value, a kind it does not know), a DC operating point that could not be built or did not converge, and every limitation the other rules recorded while they ran.",
+    "Lists, as one note per design, the parts the solver could not model (no model for a part number, an unreadable value, a kind it does not know), power nets whose voltage nothing states, a DC operating point that could not be built or did not converge, and every limitation the other rules recorded while they ran.",
   why:
     "A clean report means something only when every part was in the analysis. A transistor without a model drops out of the operating point, and the checks that need its bias say nothing about it; this note makes that silence visible instead of letting it pass for a pass.",
   fix:
@@ -52,11 +52,15 @@ export const modelCoverage: Rule<Context> = {
     const limitations = ctx.limitations().filter((l) => l.rule !== ID);
     const solverProblem = ctx.solverProblem();
     const opProblem = solverProblem === undefined ? ctx.operatingPointProblem() : undefined;
-    if (unmodelled.length === 0 && limitations.length === 0 && solverProblem === undefined && opProblem === undefined) return [];
+    const unpowered = ctx.unresolvedRails();
+    if (unmodelled.length === 0 && limitations.length === 0 && solverProblem === undefined && opProblem === undefined && unpowered.length === 0) return [];
 
     const sentences: string[] = [];
     if (solverProblem !== undefined) sentences.push(`The design could not be turned into a circuit to solve: ${solverProblem}.`);
     if (opProblem !== undefined) sentences.push(`The DC operating point could not be found: ${opProblem}.`);
+    if (unpowered.length > 0) {
+      sentences.push(`No voltage known for ${unpowered.join(", ")}: the operating point treats ${unpowered.length === 1 ? "it" : "them"} as unpowered; give ${unpowered.length === 1 ? "it" : "each"} a voltage under "rails" in loadline.json (e.g. "rails": { "${unpowered[0] ?? "VCC"}": "9V" }).`);
+    }
     if (unmodelled.length > 0) sentences.push(`Not analysed: ${unmodelled.map((u) => `${u.ref} (${u.reason})`).join("; ")}.`);
     if (limitations.length > 0) {
       const byRule = new Map<string, string[]>();
@@ -76,6 +80,7 @@ export const modelCoverage: Rule<Context> = {
         unmodelled: unmodelled.map((u) => u.ref),
         limitedRules: [...new Set(limitations.map((l) => l.rule))],
         operatingPoint: solverProblem === undefined && opProblem === undefined,
+        unresolvedRails: unpowered,
       },
     })];
   },

@@ -84,7 +84,14 @@ interface Target {
   isDefault: boolean;
 }
 
-function chooseTarget(ctx: Context, rail: Rail, configured: number, ratio: number): Target | undefined {
+/** A rail to check; `volts` is undefined for a power net whose voltage nothing states. */
+type CheckedRail = Pick<Rail, "net"> & { volts: number | undefined };
+
+function voltsText(rail: CheckedRail): string {
+  return rail.volts === undefined ? "voltage not stated" : si(rail.volts, "V");
+}
+
+function chooseTarget(ctx: Context, rail: CheckedRail, configured: number, ratio: number): Target | undefined {
   if (configured > 0) return { ohms: configured, basis: `configured target ${si(configured, "Ω")}`, isDefault: false };
   const loads = ctx.railLoads(rail.net);
   if (loads.length === 0 || !(ratio > 0)) return undefined;
@@ -144,7 +151,7 @@ function suggestionData(s: CapacitorSuggestion | undefined): Record<string, numb
   return { suggestedFarads: s.farads, suggestedSrfHertz: s.model.srfHertz, worstOhmsWithSuggestion: s.worstOhms };
 }
 
-function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: number): Finding[] {
+function checkRail(ctx: Context, rail: CheckedRail, configuredTarget: number, ratio: number): Finding[] {
   const feeds = ctx.partsOn(rail.net).filter(({ part }) => !SOURCE_KINDS.has(part.kind));
   if (feeds.length === 0) return [];
   const caps = [...ctx.groundingCapacitors(rail.net)].sort(byRef);
@@ -157,10 +164,10 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
     findings.push(finding(ctx, ID, {
       at: anchor,
       severity: "error",
-      message: `Rail ${rail.net} (${si(rail.volts, "V")}) has no bypass capacitor to ground: every stage on it shares the supply's impedance. Add a bulk electrolytic and a ceramic (e.g. 100 nF) next to ${anchor?.ref ?? "the load"}.`,
+      message: `Rail ${rail.net} (${voltsText(rail)}) has no bypass capacitor to ground: every stage on it shares the supply's impedance. Add a bulk electrolytic and a ceramic (e.g. 100 nF) next to ${anchor?.ref ?? "the load"}.`,
       parts: feeds.map((f) => f.part.ref).filter((r, i, all) => all.indexOf(r) === i).sort((a, b) => a.localeCompare(b, "en", { numeric: true })),
       nets: [rail.net],
-      data: { volts: rail.volts, capacitors: 0, ...(target ? { targetOhms: target.ohms, targetIsDefault: target.isDefault } : {}) },
+      data: { ...(rail.volts !== undefined ? { volts: rail.volts } : {}), capacitors: 0, ...(target ? { targetOhms: target.ohms, targetIsDefault: target.isDefault } : {}) },
     }));
   }
 
@@ -178,7 +185,7 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
   }
   ctx.report.addRail({
     net: rail.net,
-    volts: rail.volts,
+    volts: rail.volts ?? Number.NaN,
     targetOhms: target.ohms,
     targetBasis: target.basis,
     curve: points.map((p) => [p.hertz, p.magnitude]),
@@ -239,7 +246,7 @@ function checkRail(ctx: Context, rail: Rail, configuredTarget: number, ratio: nu
     parts: capParts,
     nets: [rail.net],
     data: {
-      volts: rail.volts, worstOhms: worstPoint.magnitude, atHertz: worstPoint.hertz, targetOhms: target.ohms,
+      ...(rail.volts !== undefined ? { volts: rail.volts } : {}), worstOhms: worstPoint.magnitude, atHertz: worstPoint.hertz, targetOhms: target.ohms,
       targetIsDefault: target.isDefault, bandIsDefault: ctx.band.isDefault, ...suggestionData(summarySuggestion),
     },
   }));
@@ -297,7 +304,8 @@ export const railBypass: Rule<Context> = {
   check(ctx, opts) {
     const configured = numberOption(opts, "targetOhms", 0);
     const ratio = numberOption(opts, "loadRatio", 100);
-    return ctx.rails().flatMap((rail) => checkRail(ctx, rail, configured, ratio));
+    const rails: CheckedRail[] = [...ctx.rails(), ...ctx.unresolvedRails().map((net) => ({ net, volts: undefined }))];
+    return rails.flatMap((rail) => checkRail(ctx, rail, configured, ratio));
   },
 };
 

@@ -31,4 +31,13 @@ describe("model-coverage", () => {
     expect(note?.data.limitedRules).toEqual(["base-ac-ground"]);
     expect(note?.message).toContain("base-ac-ground (Q2 not modelled");
   });
+  it("says when a power net has no stated voltage, and rail-bypass still checks its bypass", () => {
+    const text = kicadNetlist("vcc", ["R1 VCC b 56k", "R2 b GND 10k", "R3 VCC c 1.5k", "R4 e GND 680", "C4 e GND 100u pol", "Q1 c b e 2N3904"]);
+    const result = lint({ paths: ["/v/vcc.net"], fs: memoryFileSource({ "/v/vcc.net": text }) });
+    const findings = result.designs[0]?.findings ?? [];
+    expect(findings.find((f) => f.rule === "model-coverage")?.data.unresolvedRails).toEqual(["VCC"]);
+    const rail = findings.find((f) => f.rule === "rail-bypass");
+    expect(rail?.severity).toBe("error");
+    expect(rail?.data.targetOhms).toBeCloseTo(15, 9); // R3 1.5 kΩ / 100
+  });
 });

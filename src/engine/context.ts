@@ -78,7 +78,7 @@ export interface Context {
   rail(net: string): Rail | undefined;
   /** Power nets whose voltage nothing states (messages ask the user to set it in `rails`). */
   unresolvedRails(): string[];
-  /** Ground or a rail: an AC ground by definition. */
+  /** Ground, a rail, or a power net of unknown voltage: an AC ground by definition. */
   isSupply(net: string): boolean;
 
   /** The part with this reference (DNP parts included; check `dnp`). */
@@ -198,7 +198,9 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
   const railSurvey = lazy(() => surveyRails(circuit, config.rails));
   const railByNet = lazy(() => new Map(railSurvey().rails.map((r) => [r.net, r])));
   const isGround = (net: string): boolean => groundNets.has(net);
-  const isSupply = (net: string): boolean => groundNets.has(net) || railByNet().has(net);
+  // A power net is an AC ground whether or not its voltage is known (VCC with no config entry).
+  const unresolvedSet = lazy(() => new Set(railSurvey().unresolved));
+  const isSupply = (net: string): boolean => groundNets.has(net) || railByNet().has(net) || unresolvedSet().has(net);
   const centre = Math.sqrt(band.low * band.high);
   const acTest: AcGroundTest = {
     isSupply,
@@ -231,7 +233,7 @@ export function createContext(circuit: Circuit, config: Config, extras: ContextE
       for (const part of path.parts) {
         const next = Object.values(part.pins).find((n) => n !== cursor);
         if (next === undefined) break;
-        if (railByNet().has(next)) rails.add(next);
+        if (isSupply(next) && !groundNets.has(next)) rails.add(next);
         cursor = next;
       }
       for (const rail of rails) {
