@@ -8,7 +8,8 @@
  * sees is solved at the band's low edge with the transistors at their operating point and the other
  * coupling and bypass capacitors taken as shorts (the short-circuit time-constant method): for an
  * emitter bypass that is RE ∥ (r_e + R's/(β+1)), for a source bypass RS ∥ 1/gm, for a coupling
- * capacitor the source plus the load. Connectors count as a 50 Ω port (option `portOhms`). The
+ * capacitor the source plus the load. Coaxial connectors count as a 50 Ω port (option `portOhms`);
+ * what a pin header connects to is unknown, so it is left open. The
  * corner 1/(2πRC) must lie at or below f_low/margin (margin 10 by default); a corner above the low
  * edge itself is a warning, one between f_low/margin and f_low a note.
  *
@@ -42,7 +43,7 @@ const ID = "corner-frequency";
 
 const doc: RuleDoc = {
   what:
-    "Finds every series coupling capacitor (between two signal nets, one of them a transistor terminal or a connector) and every emitter or source bypass capacitor, solves the resistance each one works into at the band's low edge — transistors at their operating point, the other coupling and bypass capacitors taken as shorts, connectors as a 50 Ω port — and checks that its high-pass corner 1/(2πRC) lies at or below f_low/margin. For an emitter bypass that resistance is RE ∥ (r_e + R's/(β+1)), for a source bypass RS ∥ 1/gm, for a coupling capacitor the source plus the load.",
+    "Finds every series coupling capacitor (between two signal nets, one of them a transistor terminal or a connector) and every emitter or source bypass capacitor, solves the resistance each one works into at the band's low edge — transistors at their operating point, the other coupling and bypass capacitors taken as shorts, coaxial connectors as a 50 Ω port — and checks that its high-pass corner 1/(2πRC) lies at or below f_low/margin. For an emitter bypass that resistance is RE ∥ (r_e + R's/(β+1)), for a source bypass RS ∥ 1/gm, for a coupling capacitor the source plus the load.",
   why:
     "Every coupling and bypass capacitor is a high-pass corner. Sized against the wrong resistance — an emitter bypass against RE rather than the few ohms the emitter presents — it comes out too small by the ratio of the two and the gain falls away at the bottom of the band. A corner a decade below the band costs 0.04 dB and under 6° there.",
   fix:
@@ -67,7 +68,7 @@ const options = {
     type: "number" as const,
     default: 50,
     unit: "ohm",
-    description: "Source or load resistance a connector presents to a coupling capacitor (an RF port is 50 Ω).",
+    description: "Source or load resistance a coaxial connector (BNC, SMA, …) presents to a coupling capacitor (an RF port is 50 Ω); other connectors are left open, their load unknown.",
   },
 };
 
@@ -131,12 +132,18 @@ function findCandidates(ctx: Context): Candidate[] {
   return out.sort((x, y) => byRef(x.cap, y.cap));
 }
 
-/** Connector pins on signal nets terminated in the port resistance, in solver nodes: a capacitor
- * with that ESR, so the termination is there for signal and absent at DC (the bias stays put). */
+/** A coaxial connector (BNC, SMA, SMB, MCX, U.FL, F): an RF port of known impedance. What a pin
+ * header or terminal block connects to is unknown, so those stay open. */
+function isCoaxial(part: Part): boolean {
+  return /coax|bnc|sma|smb|mcx|mmcx|u\.fl|ipex|f-type/i.test(`${part.libId} ${part.value} ${part.footprint}`);
+}
+
+/** Coaxial connector pins on signal nets terminated in the port resistance, in solver nodes: a
+ * capacitor with that ESR, so the termination is there for signal and absent at DC (the bias stays put). */
 function portTerminations(ctx: Context, portOhms: number): Element[] {
   const out: Element[] = [];
   for (const part of ctx.circuit.parts) {
-    if (part.dnp || part.kind !== "connector") continue;
+    if (part.dnp || part.kind !== "connector" || !isCoaxial(part)) continue;
     for (const [pin, net] of Object.entries(part.pins)) {
       if (ctx.isSupply(net)) continue;
       const node = ctx.nodeOf(net);
