@@ -116,3 +116,33 @@ describe("operatingPointWith: re-solving with resistors changed", () => {
     expect(ctx.operatingPointWith({ R4: 680, R3: 15e3, R2: 24e3 })).toBe(e24);
   });
 });
+
+// transfer(): the small-signal voltage transfer at the operating point, against the ngspice 39 run of
+// the 9 V common-emitter stage (reference-data §6.5, deck ce_9v_2n3904.cir, recorded).
+describe("transfer: V(out)/V(in) at the operating point", () => {
+  it("matches |v(out)/v(b)| of the ngspice common-emitter deck from 100 Hz to 10 MHz within 1 %", async () => {
+    const { kicadNetlist } = await import("../fixtures/rules/netlist-writer.js");
+    const { readDesign, memoryFileSource } = await import("../src/read/index.js");
+    const { acFrequencies, acVector, loadRecording } = await import("./support/ngspice.js");
+    // The deck's capacitors are ideal: ESR and ESL fields of 0 keep ours ideal too.
+    const ideal = "ESR=0 ESL=0";
+    const text = kicadNetlist("ce", [
+      "R1 +9V b 56k", "R2 b GND 10k", "R3 +9V c 3.9k", "R4 e GND 680", `C1 e GND 100u ${ideal}`,
+      "Q1 c b e 2N3904", `C2 in b 10u ${ideal}`, `C3 c out 10u ${ideal}`, "R5 out GND 10k", "R6 in GND 1G",
+    ]);
+    const read = readDesign("/t/ce.net", { fs: memoryFileSource({ "/t/ce.net": text }) });
+    if (!read.ok) throw new Error(read.error.message);
+    const ctx = createContext(read.circuit, defaultConfig());
+    const rec = loadRecording("ce_9v_2n3904");
+    const freqs = acFrequencies(rec);
+    const vb = acVector(rec, "v(b)");
+    const vout = acVector(rec, "v(out)");
+    const picked = freqs.map((f, i) => ({ f, i })).filter(({ f }) => f >= 100 && f <= 10e6).filter((_, k) => k % 5 === 0);
+    const got = ctx.transfer("b", "out", picked.map((p) => p.f));
+    expect(got).toBeDefined();
+    for (const [k, { i }] of picked.entries()) {
+      const expected = Math.hypot(vout.re[i] ?? NaN, vout.im[i] ?? NaN) / Math.hypot(vb.re[i] ?? NaN, vb.im[i] ?? NaN);
+      expect(Math.abs((got?.[k]?.magnitude ?? NaN) / expected - 1)).toBeLessThan(0.01);
+    }
+  });
+});
