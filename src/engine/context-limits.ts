@@ -42,11 +42,11 @@ export function saturationEdge(device: DeviceOperatingPoint, card: ModelCard | u
       const vtoReported = device.type === "pjfet" ? -vto : vto;
       const volts = Math.max(0, device.vgs - vtoReported);
       const from = card?.params.VTO !== undefined ? `VTO ${trim(vtoReported)} V of card ${card.name}` : `SPICE's default VTO ${trim(vtoReported)} V (the card gives none)`;
-      return { volts, basis: `VDS(sat) = VGS − VTO = ${trim(device.vgs)} − (${trim(vtoReported)}) V, ${from}` };
+      return { volts, basis: `VDS(sat) = VGS − VTO = ${signed(device.vgs)} − ${signed(vtoReported)} V, ${from}` };
     }
     case "mosfet": {
       const volts = Math.max(0, device.vgs - device.vth);
-      return { volts, basis: `VDS(sat) = VGS − VTH = ${trim(device.vgs)} − ${trim(device.vth)} V at the operating point` };
+      return { volts, basis: `VDS(sat) = VGS − VTH = ${signed(device.vgs)} − ${signed(device.vth)} V at the operating point` };
     }
     case "diode":
       return undefined;
@@ -55,6 +55,12 @@ export function saturationEdge(device: DeviceOperatingPoint, card: ModelCard | u
 
 function trim(v: number): string {
   return String(Number(v.toPrecision(3)));
+}
+
+/** A figure inside a formula: negatives in brackets with a true minus, "(−0.8)". */
+function signed(v: number): string {
+  const t = trim(Math.abs(v));
+  return v < 0 ? `(−${t})` : t;
 }
 
 /** The model card of a solver element by name (a transistor's card, for VTO and friends). */
