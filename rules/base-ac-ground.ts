@@ -219,7 +219,7 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
       worstOhms: worst.magnitude, atHertz: worst.hertz, limitOhms: tol.limit(worst.hertz),
       failsFromHertz: first.hertz, failsToHertz: last.hertz, k, ...tol.data,
       ...(neededFarads !== undefined ? { neededFarads } : {}),
-      ...(suggestion ? { suggestedFarads: suggestion.farads, worstOhmsWithSuggestion: suggestion.worstOhms } : {}),
+      ...(suggestion ? { suggestedFarads: suggestion.farads, worstOhmsWithSuggestion: suggestion.worstOhms, worstRatioWithSuggestion: suggestion.worstRatio } : {}),
     },
   })];
 }
