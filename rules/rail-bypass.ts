@@ -183,9 +183,10 @@ function checkRail(ctx: Context, rail: CheckedRail, configuredTarget: number, ra
     if (!target && caps.length > 0) ctx.noteLimited(ID, `no target for rail ${rail.net}: no collector/drain load found on it (set targetOhms)`, []);
     return findings;
   }
-  ctx.report.addRail({
+  // The report's rail table needs a voltage; a rail whose voltage nothing states is judged but not drawn.
+  if (rail.volts !== undefined) ctx.report.addRail({
     net: rail.net,
-    volts: rail.volts ?? Number.NaN,
+    volts: rail.volts,
     targetOhms: target.ohms,
     targetBasis: target.basis,
     curve: points.map((p) => [p.hertz, p.magnitude]),
