@@ -9,7 +9,7 @@ import { findRootSheets, readDesign } from "../read/index.js";
 import { VERSION } from "../version.js";
 import { allRules } from "../../rules/index.js";
 import type { Config } from "./config.js";
-import { CONFIG_FILE_NAME, defaultConfig, findConfigFile, formatConfigError, loadConfig } from "./config.js";
+import { CONFIG_FILE_NAME, defaultConfig, findConfigFile, loadConfig } from "./config.js";
 import { createContext } from "./context.js";
 import type { Context } from "./context.js";
 import type { PathLister } from "./expand.js";
@@ -211,4 +211,3 @@ function checkDesign(file: string, choice: ConfigChoice, fs: FileSource, rules: 
   };
 }
 
-export { formatConfigError };
