@@ -83,44 +83,62 @@ export function acSweep(
   const stamp = new ComplexStamper(system);
   const xr = new Float64Array(n), xi = new Float64Array(n);
   const ctx: AcLoadContext = { omega: 0, excitedSource };
-  const named = unknowns.info.flatMap((info, i) => (info.kind === "node" ? [{ name: info.name, index: i }] : []));
-  const branches = devices.flatMap((d) => (d.branch !== undefined ? [{ name: d.name, index: d.branch }] : []));
+  // Output series resolved once, in unknown order, so the per-frequency copy is a flat loop.
   const nodeVoltages: Record<string, ComplexSeries> = {};
   const branchCurrents: Record<string, ComplexSeries> = {};
-  for (const { name } of named) nodeVoltages[name] = series(frequencies.length);
-  for (const { name } of branches) branchCurrents[name] = series(frequencies.length);
+  const outIndex: number[] = [];
+  const outSeries: ComplexSeries[] = [];
+  unknowns.info.forEach((info, i) => {
+    if (info.kind !== "node") return;
+    const s = series(frequencies.length);
+    nodeVoltages[info.name] = s;
+    outIndex.push(i);
+    outSeries.push(s);
+  });
+  for (const d of devices) {
+    if (d.branch === undefined) continue;
+    const s = series(frequencies.length);
+    branchCurrents[d.name] = s;
+    outIndex.push(d.branch);
+    outSeries.push(s);
+  }
+  const shunted = passiveOnly ? unknowns.info.flatMap((info, i) => (info.kind !== "branch" ? [i] : [])) : [];
   let problem: string | undefined;
 
-  frequencies.forEach((f, k) => {
-    ctx.omega = 2 * Math.PI * f;
+  // Everything affine in ω is assembled twice (ω = 0 and ω = 1) and then interpolated per point;
+  // only the rest (capacitors with ESR/ESL) is stamped at every frequency.
+  const included = devices.filter((d) => !(passiveOnly && d.active));
+  const affine = included.filter((d) => d.acAffine === true);
+  const perPoint = included.filter((d) => d.acAffine !== true);
+  for (const which of [0, 1] as const) {
+    ctx.omega = which;
     system.begin();
-    for (const device of devices) {
-      if (passiveOnly && device.active) continue;
-      device.loadAc(stamp, ctx);
-    }
-    if (passiveOnly) {
-      unknowns.info.forEach((info, i) => {
-        if (info.kind !== "branch") system.add(i, i, PASSIVE_SHUNT, 0);
-      });
-    }
+    for (const device of affine) device.loadAc(stamp, ctx);
+    for (const i of shunted) system.add(i, i, PASSIVE_SHUNT, 0);
     if (excitation.kind === "current") {
       system.addRhs(injectAt, 1, 0);
       system.addRhs(returnAt, -1, 0);
     }
+    system.saveAffinePart(which);
+  }
+
+  for (let k = 0; k < frequencies.length; k++) {
+    const f = frequencies[k] as number;
+    ctx.omega = 2 * Math.PI * f;
+    system.beginAt(ctx.omega);
+    for (const device of perPoint) device.loadAc(stamp, ctx);
     const solved = system.solve(xr, xi);
     if (!solved.ok) {
       problem ??= `the small-signal matrix is singular at ${unknowns.describe(solved.singularUnknown)} (${f} Hz)`;
-      return;
+      continue;
     }
-    for (const { name, index } of named) {
-      const s = nodeVoltages[name];
-      if (s) { s.re[k] = xr[index] as number; s.im[k] = xi[index] as number; }
+    for (let o = 0; o < outIndex.length; o++) {
+      const s = outSeries[o] as ComplexSeries;
+      const index = outIndex[o] as number;
+      s.re[k] = xr[index] as number;
+      s.im[k] = xi[index] as number;
     }
-    for (const { name, index } of branches) {
-      const s = branchCurrents[name];
-      if (s) { s.re[k] = xr[index] as number; s.im[k] = xi[index] as number; }
-    }
-  });
+  }
 
   const result: AcResult = { frequencies: [...frequencies], nodeVoltages, branchCurrents };
   if (problem !== undefined) result.problem = problem;

@@ -4,7 +4,7 @@
 // source stepping (supplies ramped up from zero). Every loop is bounded by an iteration cap and
 // a wall-clock deadline, so a hopeless circuit returns a reason instead of hanging.
 
-import { TOLERANCES, type DcLoadContext, type DcMode } from "./device.js";
+import { TOLERANCES, type DcLoadContext, type DcMode, type Device } from "./device.js";
 import { diagnoseTopology } from "./diagnose.js";
 import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
 import { RealSystem, type Unknown } from "./mna.js";
@@ -57,6 +57,8 @@ class DcSolver {
   private xNew: Float64Array;
   totalIterations = 0;
   readonly ctx: DcLoadContext;
+  private baseReady = false;
+  private readonly varying: Device[];
 
   constructor(
     readonly elaborated: ElaboratedCircuit,
@@ -70,6 +72,7 @@ class DcSolver {
     this.x = new Float64Array(n);
     this.xNew = new Float64Array(n);
     this.ctx = { mode: "normal", gmin, srcFactor: 1, limited: false };
+    this.varying = elaborated.devices.filter((d) => !d.dcConstant);
   }
 
   private load(x: Float64Array, mode: DcMode, srcFactor: number, diagGmin: number): void {
@@ -77,8 +80,15 @@ class DcSolver {
     ctx.mode = mode;
     ctx.srcFactor = srcFactor;
     ctx.limited = false;
-    this.system.begin();
-    for (const device of this.elaborated.devices) device.loadDc(x, this.stamp, ctx);
+    // Resistors, inductors and capacitors stamp the same entries every iteration: once is enough.
+    if (!this.baseReady) {
+      this.system.begin();
+      for (const device of this.elaborated.devices) if (device.dcConstant) device.loadDc(x, this.stamp, ctx);
+      this.system.saveBase();
+      this.baseReady = true;
+    }
+    this.system.beginFromBase();
+    for (const device of this.varying) device.loadDc(x, this.stamp, ctx);
     if (diagGmin > 0) {
       const info = this.elaborated.unknowns.info;
       for (let i = 0; i < info.length; i++) if (info[i]?.kind !== "branch") this.system.add(i, i, diagGmin);

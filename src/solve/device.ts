@@ -47,6 +47,16 @@ export interface Device {
   readonly nodes: readonly Unknown[];
   /** Branch unknown of a V source or inductor. */
   readonly branch?: Unknown;
+  /**
+   * loadDc stamps the same matrix entries whatever the trial solution and stamps no right-hand
+   * side (resistors, inductors, capacitors): the engine assembles these once per solve.
+   */
+  readonly dcConstant?: boolean;
+  /**
+   * loadAc's stamps are affine in ω (G + jωC), so the sweep can assemble them once; false for
+   * elements such as a capacitor with ESR/ESL whose admittance is not.
+   */
+  readonly acAffine?: boolean;
   loadDc(x: Float64Array, stamp: RealStamp, ctx: DcLoadContext): void;
   loadAc(stamp: ComplexStamp, ctx: AcLoadContext): void;
   /**

@@ -14,7 +14,7 @@ import {
   resistorDevice,
   voltageSourceDevice,
 } from "./models/passive.js";
-import type { Element, SolverCircuit } from "./netlist.js";
+import type { Element, ModelCard, SolverCircuit } from "./netlist.js";
 
 export interface ElaboratedCircuit {
   circuit: SolverCircuit;
@@ -36,16 +36,16 @@ function deviceFor(el: Element, unknowns: UnknownMap): Device {
   }
 }
 
-/** Element values that must be finite numbers, by kind. */
-function numericFields(el: Element): Array<[string, number | undefined]> {
+/** Calls `check(label, value)` for every numeric field of the element. */
+function forEachNumericField(el: Element, check: (label: string, value: number | undefined) => void): void {
   switch (el.kind) {
-    case "R": return [["resistance", el.ohms]];
-    case "C": return [["capacitance", el.farads], ["ESR", el.esr], ["ESL", el.esl]];
-    case "L": return [["inductance", el.henries], ["series resistance", el.series]];
-    case "V": return [["voltage", el.dc], ["AC amplitude", el.ac], ["series resistance", el.series]];
-    case "I": return [["current", el.dc], ["AC amplitude", el.ac]];
-    case "D": case "Q": case "J": return [["area", el.area]];
-    case "M": return [["W", el.w], ["L", el.l]];
+    case "R": check("resistance", el.ohms); return;
+    case "C": check("capacitance", el.farads); check("ESR", el.esr); check("ESL", el.esl); return;
+    case "L": check("inductance", el.henries); check("series resistance", el.series); return;
+    case "V": check("voltage", el.dc); check("AC amplitude", el.ac); check("series resistance", el.series); return;
+    case "I": check("current", el.dc); check("AC amplitude", el.ac); return;
+    case "D": case "Q": case "J": check("area", el.area); return;
+    case "M": check("W", el.w); check("L", el.l); return;
   }
 }
 
@@ -64,18 +64,25 @@ function elementNodes(el: Element): string[] {
 export function validateElements(circuit: SolverCircuit): string[] {
   const problems: string[] = [];
   const seen = new Set<string>();
+  const cardsChecked = new Set<ModelCard>();
+  let current: Element | undefined;
+  const check = (label: string, value: number | undefined): void => {
+    if (value !== undefined && !Number.isFinite(value)) problems.push(`${current?.name ?? "?"} has a ${label} that is not a finite number (${value})`);
+  };
   for (const el of circuit.elements) {
+    current = el;
     if (seen.has(el.name)) problems.push(`two elements are both named ${el.name}`);
     seen.add(el.name);
-    for (const [label, value] of numericFields(el)) {
-      if (value !== undefined && !Number.isFinite(value)) problems.push(`${el.name} has a ${label} that is not a finite number (${value})`);
-    }
-    if (el.kind === "D" || el.kind === "Q" || el.kind === "J" || el.kind === "M") {
-      for (const [name, value] of Object.entries(el.model.params)) {
-        if (Number.isNaN(value)) problems.push(`${el.name}: model ${el.model.name} parameter ${name} is not a number`);
+    forEachNumericField(el, check);
+    if ((el.kind === "D" || el.kind === "Q" || el.kind === "J" || el.kind === "M") && !cardsChecked.has(el.model)) {
+      cardsChecked.add(el.model);
+      for (const name in el.model.params) {
+        if (Number.isNaN(el.model.params[name])) problems.push(`${el.name}: model ${el.model.name} parameter ${name} is not a number`);
       }
     }
-    if (elementNodes(el).some((n) => n.trim() === "")) problems.push(`${el.name} has a pin that is not connected to any node`);
+    for (const n of elementNodes(el)) {
+      if (!/\S/.test(n)) problems.push(`${el.name} has a pin that is not connected to any node`);
+    }
     if (el.kind === "M" && ((el.w !== undefined && el.w <= 0) || (el.l !== undefined && el.l <= 0))) {
       problems.push(`${el.name} needs a positive channel W and L`);
     }

@@ -69,6 +69,8 @@ export class UnknownMap {
 
 /** Diagonal preference for pivots: accept the diagonal if within this factor of the column's best. */
 const PIVOT_TOLERANCE = 0.1;
+/** A re-used pivot may shrink to this fraction of its column before a fresh pivot search is forced. */
+const REFACTOR_TOLERANCE = 1e-3;
 
 class SlotTape {
   rows: Int32Array = new Int32Array(256);
@@ -183,6 +185,8 @@ export class RealSystem {
   readonly rhs: Float64Array;
   private cscValues = new Float64Array(0);
   private readonly lu: RealSparseLu;
+  /** A factorisation with the current pattern exists, so its pivot order can be re-used. */
+  private factored = false;
 
   constructor(n: number) {
     this.n = n;
@@ -191,11 +195,28 @@ export class RealSystem {
     this.lu = new RealSparseLu(n);
   }
 
+  private base = new Float64Array(0);
+  private baseRhs = new Float64Array(0);
+
   /** Starts a new assembly: clears values and right-hand side. */
   begin(): void {
     this.pattern.rewind();
     this.values.fill(0);
     this.rhs.fill(0);
+  }
+
+  /** Remembers what has been assembled so far (the constant part of every Newton iteration). */
+  saveBase(): void {
+    this.base = this.values.slice(0, this.pattern.slotCount);
+    this.baseRhs = this.rhs.slice();
+  }
+
+  /** Starts an assembly from the saved constant part instead of from zero. */
+  beginFromBase(): void {
+    this.pattern.rewind();
+    this.values.fill(0);
+    this.values.set(this.base);
+    this.rhs.set(this.baseRhs);
   }
 
   add(row: Unknown, col: Unknown, value: number): void {
@@ -216,7 +237,8 @@ export class RealSystem {
   /** Factors the assembled matrix and solves into `out`. */
   solve(out: Float64Array): SolveOutcome {
     const pattern = this.pattern;
-    if (pattern.prepare() || this.cscValues.length !== pattern.slotCount) {
+    const symbolicChanged = pattern.prepare();
+    if (symbolicChanged || this.cscValues.length !== pattern.slotCount) {
       this.cscValues = new Float64Array(pattern.slotCount);
     }
     if (this.values.length < pattern.slotCount) {
@@ -228,13 +250,17 @@ export class RealSystem {
     csc.fill(0);
     const count = pattern.slotCount;
     for (let s = 0; s < count; s++) csc[map[s] as number] = values[s] as number;
-    const outcome = this.lu.factor(pattern.csc, csc, pattern.order, PIVOT_TOLERANCE);
-    if (!outcome.ok) return { ok: false, singularUnknown: outcome.singularColumn };
+    if (!(this.factored && !symbolicChanged && this.lu.refactor(pattern.csc, csc, REFACTOR_TOLERANCE))) {
+      const outcome = this.lu.factor(pattern.csc, csc, pattern.order, PIVOT_TOLERANCE);
+      this.factored = outcome.ok;
+      if (!outcome.ok) return { ok: false, singularUnknown: outcome.singularColumn };
+    }
     this.lu.solve(this.rhs, out);
     return { ok: true };
   }
 
   get factorNonzeros(): number { return this.lu.factorNonzeros; }
+  get matrixNonzeros(): number { return this.pattern.slotCount; }
 }
 
 export class ComplexSystem {
@@ -247,6 +273,7 @@ export class ComplexSystem {
   private cscRe = new Float64Array(0);
   private cscIm = new Float64Array(0);
   private readonly lu: ComplexSparseLu;
+  private factored = false;
 
   constructor(n: number) {
     this.n = n;
@@ -262,6 +289,49 @@ export class ComplexSystem {
     this.im.fill(0);
     this.rhsRe.fill(0);
     this.rhsIm.fill(0);
+  }
+
+  private y0Re = new Float64Array(0);
+  private y0Im = new Float64Array(0);
+  private y1Re = new Float64Array(0);
+  private y1Im = new Float64Array(0);
+  private rhs0Re = new Float64Array(0);
+  private rhs0Im = new Float64Array(0);
+
+  /**
+   * Affine-in-ω assembly, Y(ω) = Y0 + ω·Y1: call after assembling at ω = 0 (which = 0), then
+   * after assembling again at ω = 1 (which = 1). Afterwards beginAt(ω) starts from Y(ω) in one
+   * pass over the entries, so only elements that are not affine in ω need stamping per point.
+   */
+  saveAffinePart(which: 0 | 1): void {
+    const count = this.pattern.slotCount;
+    if (which === 0) {
+      this.y0Re = this.re.slice(0, count);
+      this.y0Im = this.im.slice(0, count);
+      this.rhs0Re = this.rhsRe.slice();
+      this.rhs0Im = this.rhsIm.slice();
+      return;
+    }
+    this.y1Re = new Float64Array(count);
+    this.y1Im = new Float64Array(count);
+    for (let s = 0; s < count; s++) {
+      this.y1Re[s] = (this.re[s] as number) - (this.y0Re[s] ?? 0);
+      this.y1Im[s] = (this.im[s] as number) - (this.y0Im[s] ?? 0);
+    }
+  }
+
+  beginAt(omega: number): void {
+    this.pattern.rewind();
+    const re = this.re, im = this.im, y0r = this.y0Re, y0i = this.y0Im, y1r = this.y1Re, y1i = this.y1Im;
+    const count = y1r.length;
+    for (let s = 0; s < count; s++) {
+      re[s] = (y0r[s] ?? 0) + omega * (y1r[s] as number);
+      im[s] = (y0i[s] ?? 0) + omega * (y1i[s] as number);
+    }
+    re.fill(0, count);
+    im.fill(0, count);
+    this.rhsRe.set(this.rhs0Re);
+    this.rhsIm.set(this.rhs0Im);
   }
 
   add(row: Unknown, col: Unknown, re: number, im: number): void {
@@ -284,7 +354,8 @@ export class ComplexSystem {
 
   solve(outRe: Float64Array, outIm: Float64Array): SolveOutcome {
     const pattern = this.pattern;
-    if (pattern.prepare() || this.cscRe.length !== pattern.slotCount) {
+    const symbolicChanged = pattern.prepare();
+    if (symbolicChanged || this.cscRe.length !== pattern.slotCount) {
       this.cscRe = new Float64Array(pattern.slotCount);
       this.cscIm = new Float64Array(pattern.slotCount);
     }
@@ -301,9 +372,15 @@ export class ComplexSystem {
       cr[p] = this.re[s] as number;
       ci[p] = this.im[s] as number;
     }
-    const outcome = this.lu.factor(pattern.csc, cr, ci, pattern.order, PIVOT_TOLERANCE);
-    if (!outcome.ok) return { ok: false, singularUnknown: outcome.singularColumn };
+    if (!(this.factored && !symbolicChanged && this.lu.refactor(pattern.csc, cr, ci, REFACTOR_TOLERANCE))) {
+      const outcome = this.lu.factor(pattern.csc, cr, ci, pattern.order, PIVOT_TOLERANCE);
+      this.factored = outcome.ok;
+      if (!outcome.ok) return { ok: false, singularUnknown: outcome.singularColumn };
+    }
     this.lu.solve(this.rhsRe, this.rhsIm, outRe, outIm);
     return { ok: true };
   }
+
+  get factorNonzeros(): number { return this.lu.factorNonzeros; }
+  get matrixNonzeros(): number { return this.pattern.slotCount; }
 }

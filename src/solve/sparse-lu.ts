@@ -108,6 +108,9 @@ abstract class SparseLuBase {
     return top;
   }
 
+  /** Entries in L and U (fill report). */
+  get factorNonzeros(): number { return (this.Lp[this.n] as number) + (this.Up[this.n] as number); }
+
   /** Renumbers L's row indices from original rows to pivot order once all columns are done. */
   protected finishPattern(): void {
     const lnz = this.Lp[this.n] as number;
@@ -202,6 +205,46 @@ export class RealSparseLu extends SparseLuBase {
     return { ok: true };
   }
 
+  /**
+   * Numeric-only factorisation of a matrix with the same pattern, re-using the previous pivot
+   * order and L/U structure (no search, no depth-first reach). Returns false — and leaves the
+   * factors unusable — when a re-used pivot has become too small against its column, so the
+   * caller must fall back to factor().
+   */
+  refactor(pattern: CscPattern, values: Float64Array, pivotTolerance: number): boolean {
+    const n = this.n;
+    const { colPtr, rowIdx } = pattern;
+    const pinv = this.pinv, x = this.x, order = this.order;
+    const Lp = this.Lp, Li = this.Li.data, Lx = this.Lx.data, Up = this.Up, Ui = this.Ui.data, Ux = this.Ux.data;
+    for (let k = 0; k < n; k++) {
+      const uStart = Up[k] as number, uEnd = Up[k + 1] as number;
+      const lStart = Lp[k] as number, lEnd = Lp[k + 1] as number;
+      for (let p = uStart; p < uEnd; p++) x[Ui[p] as number] = 0;
+      for (let p = lStart + 1; p < lEnd; p++) x[Li[p] as number] = 0;
+      const col = order[k] as number;
+      const aEnd = colPtr[col + 1] as number;
+      for (let p = colPtr[col] as number; p < aEnd; p++) x[pinv[rowIdx[p] as number] as number] = values[p] as number;
+      for (let p = uStart; p < uEnd - 1; p++) {
+        const j = Ui[p] as number;
+        const xj = x[j] as number;
+        Ux[p] = xj;
+        if (xj === 0) continue;
+        const end = Lp[j + 1] as number;
+        for (let q = (Lp[j] as number) + 1; q < end; q++) {
+          const i = Li[q] as number;
+          x[i] = (x[i] as number) - (Lx[q] as number) * xj;
+        }
+      }
+      const pivot = x[k] as number;
+      Ux[uEnd - 1] = pivot;
+      let largest = 0;
+      for (let p = lStart + 1; p < lEnd; p++) largest = Math.max(largest, Math.abs(x[Li[p] as number] as number));
+      if (!(Math.abs(pivot) > 0) || Math.abs(pivot) < pivotTolerance * largest) return false;
+      for (let p = lStart + 1; p < lEnd; p++) Lx[p] = (x[Li[p] as number] as number) / pivot;
+    }
+    return true;
+  }
+
   /** Solves A·out = b with the last successful factorisation. */
   solve(b: Float64Array, out: Float64Array): void {
     const n = this.n, pinv = this.pinv, y = this.y, order = this.order;
@@ -229,8 +272,6 @@ export class RealSparseLu extends SparseLuBase {
     for (let k = 0; k < n; k++) out[order[k] as number] = y[k] as number;
   }
 
-  /** Entries in L and U, for the benchmark's fill report. */
-  get factorNonzeros(): number { return (this.Lp[this.n] as number) + (this.Up[this.n] as number); }
 }
 
 export class ComplexSparseLu extends SparseLuBase {
@@ -342,6 +383,62 @@ export class ComplexSparseLu extends SparseLuBase {
     Up[n] = unz;
     this.finishPattern();
     return { ok: true };
+  }
+
+  /** Complex counterpart of RealSparseLu.refactor. */
+  refactor(pattern: CscPattern, re: Float64Array, im: Float64Array, pivotTolerance: number): boolean {
+    const n = this.n;
+    const { colPtr, rowIdx } = pattern;
+    const pinv = this.pinv, xr = this.xr, xm = this.xm, order = this.order;
+    const Lp = this.Lp, Li = this.Li.data, Lr = this.Lr.data, Lm = this.Lm.data;
+    const Up = this.Up, Ui = this.Ui.data, Ur = this.Ur.data, Um = this.Um.data;
+    const tol2 = pivotTolerance * pivotTolerance;
+    for (let k = 0; k < n; k++) {
+      const uStart = Up[k] as number, uEnd = Up[k + 1] as number;
+      const lStart = Lp[k] as number, lEnd = Lp[k + 1] as number;
+      for (let p = uStart; p < uEnd; p++) { const i = Ui[p] as number; xr[i] = 0; xm[i] = 0; }
+      for (let p = lStart + 1; p < lEnd; p++) { const i = Li[p] as number; xr[i] = 0; xm[i] = 0; }
+      const col = order[k] as number;
+      const aEnd = colPtr[col + 1] as number;
+      for (let p = colPtr[col] as number; p < aEnd; p++) {
+        const i = pinv[rowIdx[p] as number] as number;
+        xr[i] = re[p] as number;
+        xm[i] = im[p] as number;
+      }
+      for (let p = uStart; p < uEnd - 1; p++) {
+        const j = Ui[p] as number;
+        const ar = xr[j] as number, am = xm[j] as number;
+        Ur[p] = ar;
+        Um[p] = am;
+        if (ar === 0 && am === 0) continue;
+        const end = Lp[j + 1] as number;
+        for (let q = (Lp[j] as number) + 1; q < end; q++) {
+          const i = Li[q] as number;
+          const lr = Lr[q] as number, lm = Lm[q] as number;
+          xr[i] = (xr[i] as number) - (lr * ar - lm * am);
+          xm[i] = (xm[i] as number) - (lr * am + lm * ar);
+        }
+      }
+      const pr = xr[k] as number, pm = xm[k] as number;
+      Ur[uEnd - 1] = pr;
+      Um[uEnd - 1] = pm;
+      const pmag2 = pr * pr + pm * pm;
+      let largest2 = 0;
+      for (let p = lStart + 1; p < lEnd; p++) {
+        const i = Li[p] as number;
+        const vr = xr[i] as number, vm = xm[i] as number;
+        largest2 = Math.max(largest2, vr * vr + vm * vm);
+      }
+      if (!(pmag2 > 0) || pmag2 < tol2 * largest2) return false;
+      const invR = pr / pmag2, invM = -pm / pmag2;
+      for (let p = lStart + 1; p < lEnd; p++) {
+        const i = Li[p] as number;
+        const vr = xr[i] as number, vm = xm[i] as number;
+        Lr[p] = vr * invR - vm * invM;
+        Lm[p] = vr * invM + vm * invR;
+      }
+    }
+    return true;
   }
 
   solve(bRe: Float64Array, bIm: Float64Array, outRe: Float64Array, outIm: Float64Array): void {

@@ -253,6 +253,8 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
     cbeIdeal: 0, gbeIdeal: 0, cbcIdeal: 0, gbcIdeal: 0, qb: 1, dqbdve: 0, dqbdvc: 0,
   };
   let vbx = 0;
+  // Capacitances depend only on the operating point: computed once per AC sweep, not per frequency.
+  let caps: BjtCapacitances | null = null;
 
   const stampOhmic = (stamp: RealStamp): void => {
     if (k.gc > 0) stamp.conductance(c, cp, k.gc);
@@ -269,6 +271,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
     name: el.name,
     active: true,
     nodes: [c, b, e],
+    acAffine: true,
     loadDc(x, stamp, ctx: DcLoadContext) {
       let vbe: number, vbc: number;
       if (ctx.mode === "init-junction") {
@@ -284,6 +287,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
       }
       vbx = t * (voltageOf(x, b) - voltageOf(x, cp));
       evaluate(k, vbe, vbc, ctx.gmin, s, scratch);
+      caps = null;
       stampOhmic(stamp);
       // Collector transport current c'→e' and base current b'→e', each linearised in the
       // internal junction voltages (real node differences are polarity × vbe, polarity × vbc).
@@ -305,7 +309,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;
-      const cap = capacitances(k, s, vbx);
+      const cap = (caps ??= capacitances(k, s, vbx));
       stampOhmicAc(stamp);
       stamp.transadmittance(cp, ep, bp, ep, s.gm + s.go, 0);
       stamp.transadmittance(cp, ep, bp, cp, -(s.go + s.gmu), 0);
@@ -321,7 +325,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
       const vc = voltageOf(x, c), vb = voltageOf(x, b), ve = voltageOf(x, e);
       const icIn = t * s.cc;
       const ibIn = t * s.cb;
-      const cap = capacitances(k, s, vbx);
+      const cap = (caps ??= capacitances(k, s, vbx));
       return {
         kind: "bjt",
         type: t === 1 ? "npn" : "pnp",

@@ -103,6 +103,9 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
   const junctionAnode: Unknown = k.gs > 0 ? unknowns.internalNode(el.name, "anode") : anode;
   const scratch: CurrentAndSlope = { i: 0, g: 0 };
   const state = { vd: 0, id: 0, gd: 0 };
+  // Junction plus diffusion capacitance at the operating point, computed once per AC sweep.
+  let cap: number | null = null;
+  const capacitance = (): number => (cap ??= depletionCapacitance(state.vd, k.cj0, k.vj, k.m, k.fc) + k.tt * state.gd);
 
   const limitedVoltage = (vd: number, ctx: DcLoadContext): number => {
     if (ctx.mode !== "normal") return vd;
@@ -118,6 +121,7 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
     name: el.name,
     active: true,
     nodes: [anode, cathode],
+    acAffine: true,
     loadDc(x, stamp, ctx) {
       let vd = ctx.mode === "init-junction" ? k.vcrit : voltageOf(x, junctionAnode) - voltageOf(x, cathode);
       if (!Number.isFinite(vd)) vd = 0;
@@ -128,6 +132,7 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
       state.vd = vd;
       state.id = id;
       state.gd = gd;
+      cap = null;
       if (k.gs > 0) stamp.conductance(anode, junctionAnode, k.gs);
       stamp.conductance(junctionAnode, cathode, gd);
       stamp.current(junctionAnode, cathode, id - gd * vd);
@@ -138,8 +143,7 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
     },
     loadAc(stamp, ctx) {
       if (k.gs > 0) stamp.admittance(anode, junctionAnode, k.gs, 0);
-      const cap = depletionCapacitance(state.vd, k.cj0, k.vj, k.m, k.fc) + k.tt * state.gd;
-      stamp.admittance(junctionAnode, cathode, state.gd, ctx.omega * cap);
+      stamp.admittance(junctionAnode, cathode, state.gd, ctx.omega * capacitance());
     },
     report(x): DiodeOperatingPoint {
       const vd = voltageOf(x, anode) - voltageOf(x, cathode);
@@ -151,7 +155,7 @@ export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
         id: state.id,
         power: vd * state.id,
         gd: state.gd,
-        cd: depletionCapacitance(state.vd, k.cj0, k.vj, k.m, k.fc) + k.tt * state.gd,
+        cd: capacitance(),
       };
     },
   };

@@ -152,11 +152,16 @@ export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
   const t = k.polarity;
   const j: CurrentAndSlope = { i: 0, g: 0 };
   const s: JfetState = { vgs: 0, vgd: 0, ids: 0, gm: 0, gds: 0, cgsDiode: 0, ggs: 0, cgdDiode: 0, ggd: 0 };
+  // Gate capacitances at the operating point, computed once per AC sweep.
+  let caps: { cgs: number; cgd: number } | null = null;
+  const capacitances = (): { cgs: number; cgd: number } =>
+    (caps ??= { cgs: depletionCapacitance(s.vgs, k.cgs, k.pb, k.m, k.fc), cgd: depletionCapacitance(s.vgd, k.cgd, k.pb, k.m, k.fc) });
 
   return {
     name: el.name,
     active: true,
     nodes: [d, g, src],
+    acAffine: true,
     loadDc(x, stamp, ctx) {
       let vgs: number, vgd: number;
       if (ctx.mode === "init-junction") {
@@ -177,6 +182,7 @@ export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
       }
       s.vgs = vgs;
       s.vgd = vgd;
+      caps = null;
       junctionCurrent(vgs, k.isat, k.vtGate, j);
       s.cgsDiode = j.i + ctx.gmin * vgs;
       s.ggs = j.g + ctx.gmin;
@@ -211,10 +217,9 @@ export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
       const w = ctx.omega;
       if (k.gd > 0) stamp.admittance(d, dp, k.gd, 0);
       if (k.gs > 0) stamp.admittance(src, sp, k.gs, 0);
-      const capgs = depletionCapacitance(s.vgs, k.cgs, k.pb, k.m, k.fc);
-      const capgd = depletionCapacitance(s.vgd, k.cgd, k.pb, k.m, k.fc);
-      stamp.admittance(g, sp, s.ggs, w * capgs);
-      stamp.admittance(g, dp, s.ggd, w * capgd);
+      const c = capacitances();
+      stamp.admittance(g, sp, s.ggs, w * c.cgs);
+      stamp.admittance(g, dp, s.ggd, w * c.cgd);
       stamp.transadmittance(dp, sp, g, sp, s.gm, 0);
       stamp.transadmittance(dp, sp, dp, sp, s.gds, 0);
     },
@@ -234,8 +239,8 @@ export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
         power: t * (vd * id + vg * ig - vs * (id + ig)),
         gm: s.gm,
         gds: s.gds,
-        cgs: depletionCapacitance(s.vgs, k.cgs, k.pb, k.m, k.fc),
-        cgd: depletionCapacitance(s.vgd, k.cgd, k.pb, k.m, k.fc),
+        cgs: capacitances().cgs,
+        cgd: capacitances().cgd,
       };
     },
   };

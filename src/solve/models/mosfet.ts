@@ -215,11 +215,20 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
     vgs: 0, vds: 0, vbs: 0, mode: 1, von: k.vto, vdsat: 0,
     cdrain: 0, gm: 0, gds: 0, gmbs: 0, cbs: 0, gbs: 0, cbd: 0, gbd: 0,
   };
+  // Capacitances at the operating point, computed once per AC sweep.
+  let caps: (MeyerCaps & { cbs: number; cbd: number }) | null = null;
+  const capacitances = (): MeyerCaps & { cbs: number; cbd: number } =>
+    (caps ??= {
+      ...gateCapacitances(k, s),
+      cbs: depletionCapacitance(s.vbs, k.cbs, k.pb, k.mj, k.fc),
+      cbd: depletionCapacitance(s.vbs - s.vds, k.cbd, k.pb, k.mj, k.fc),
+    });
 
   return {
     name: el.name,
     active: true,
     nodes: [d, g, src, b],
+    acAffine: true,
     loadDc(x, stamp, ctx) {
       let vgs: number, vds: number, vbs: number;
       if (ctx.mode === "init-junction") {
@@ -258,6 +267,7 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
       s.vds = vds;
       s.vbs = vbs;
       s.mode = vds >= 0 ? 1 : -1;
+      caps = null;
       const vbd = vbs - vds;
       [s.cbs, s.gbs] = bulkJunction(vbs, k.isat, ctx.gmin);
       [s.cbd, s.gbd] = bulkJunction(vbd, k.isat, ctx.gmin);
@@ -301,17 +311,14 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;
-      const caps = gateCapacitances(k, s);
-      const vbd = s.vbs - s.vds;
-      const capbs = depletionCapacitance(s.vbs, k.cbs, k.pb, k.mj, k.fc);
-      const capbd = depletionCapacitance(vbd, k.cbd, k.pb, k.mj, k.fc);
+      const c = capacitances();
       if (k.gd > 0) stamp.admittance(d, dp, k.gd, 0);
       if (k.gs > 0) stamp.admittance(src, sp, k.gs, 0);
-      stamp.admittance(b, sp, s.gbs, w * capbs);
-      stamp.admittance(b, dp, s.gbd, w * capbd);
-      stamp.admittance(g, sp, 0, w * caps.cgs);
-      stamp.admittance(g, dp, 0, w * caps.cgd);
-      stamp.admittance(g, b, 0, w * caps.cgb);
+      stamp.admittance(b, sp, s.gbs, w * c.cbs);
+      stamp.admittance(b, dp, s.gbd, w * c.cbd);
+      stamp.admittance(g, sp, 0, w * c.cgs);
+      stamp.admittance(g, dp, 0, w * c.cgd);
+      stamp.admittance(g, b, 0, w * c.cgb);
       if (s.mode === 1) {
         stamp.transadmittance(dp, sp, g, sp, s.gm, 0);
         stamp.transadmittance(dp, sp, dp, sp, s.gds, 0);
@@ -327,7 +334,7 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
       // Drain pin current (n-channel sense): channel current minus what the bulk-drain diode takes.
       const id = s.mode * s.cdrain - s.cbd;
       const ib = s.cbs + s.cbd;
-      const caps = gateCapacitances(k, s);
+      const c = capacitances();
       return {
         kind: "mosfet",
         type: t === 1 ? "nmos" : "pmos",
@@ -341,9 +348,9 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
         gm: s.gm,
         gds: s.gds,
         gmbs: s.gmbs,
-        cgs: caps.cgs,
-        cgd: caps.cgd,
-        cgb: caps.cgb,
+        cgs: c.cgs,
+        cgd: c.cgd,
+        cgb: c.cgb,
       };
     },
   };

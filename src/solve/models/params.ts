@@ -15,19 +15,34 @@ export interface ParamSpec {
 
 export type ResolvedParams = Readonly<Record<string, number>>;
 
+const tableDefaults = new WeakMap<readonly ParamSpec[], Readonly<Record<string, number>>>();
+
+/** The card's parameters over the table's defaults (upper-case SPICE names). */
 export function resolveParams(card: ModelCard, table: readonly ParamSpec[]): ResolvedParams {
-  const resolved: Record<string, number> = {};
-  for (const spec of table) {
-    const given = card.params[spec.name];
-    resolved[spec.name] = given !== undefined && Number.isFinite(given) ? given : spec.default;
+  let defaults = tableDefaults.get(table);
+  if (!defaults) {
+    const d: Record<string, number> = {};
+    for (const spec of table) d[spec.name] = spec.default;
+    defaults = Object.freeze(d);
+    tableDefaults.set(table, defaults);
+  }
+  const resolved: Record<string, number> = { ...defaults };
+  for (const key in card.params) {
+    const given = card.params[key];
+    // Cards should already be upper case (netlist.ts); a stray "Is" or "vaf" still counts.
+    const name = key.toUpperCase();
+    if (given !== undefined && Number.isFinite(given) && name in resolved) resolved[name] = given;
   }
   return resolved;
 }
 
 /** Whether the card sets the parameter (SPICE distinguishes "given" from "default" for a few). */
 export function isGiven(card: ModelCard, name: string): boolean {
-  const v = card.params[name];
-  return v !== undefined && Number.isFinite(v);
+  for (const key in card.params) {
+    const v = card.params[key];
+    if (key.toUpperCase() === name && v !== undefined && Number.isFinite(v)) return true;
+  }
+  return false;
 }
 
 /** Card parameters the model does not use (temperature coefficients, noise, unsupported effects). */

@@ -26,6 +26,8 @@ export function resistorDevice(el: ResistorElement, unknowns: UnknownMap): Devic
     name: el.name,
     active: false,
     nodes: [a, b],
+    dcConstant: true,
+    acAffine: true,
     loadDc(_x, stamp) { stamp.conductance(a, b, g); },
     loadAc(stamp) { stamp.admittance(a, b, g, 0); },
   };
@@ -60,6 +62,9 @@ export function capacitorDevice(el: CapacitorElement, unknowns: UnknownMap): Dev
     name: el.name,
     active: false,
     nodes: [a, b],
+    dcConstant: true,
+    // A pure capacitance is jωC; with ESR or ESL the series branch is not affine in ω.
+    acAffine: esr === 0 && esl === 0,
     // Open at DC: nothing to stamp.
     loadDc() {},
     loadAc(stamp, ctx) {
@@ -83,6 +88,8 @@ export function inductorDevice(el: InductorElement, unknowns: UnknownMap): Devic
     active: false,
     nodes: [a, b],
     branch,
+    dcConstant: true,
+    acAffine: true,
     loadDc(_x, stamp) {
       stamp.entry(a, branch, 1);
       stamp.entry(b, branch, -1);
@@ -111,6 +118,7 @@ export function voltageSourceDevice(el: VoltageSourceElement, unknowns: UnknownM
     active: false,
     nodes: [pos, neg],
     branch,
+    acAffine: true,
     loadDc(_x, stamp, ctx) {
       stamp.entry(pos, branch, 1);
       stamp.entry(neg, branch, -1);
@@ -138,6 +146,7 @@ export function currentSourceDevice(el: CurrentSourceElement, unknowns: UnknownM
     name: el.name,
     active: false,
     nodes: [pos, neg],
+    acAffine: true,
     loadDc(_x, stamp, ctx) { stamp.current(pos, neg, el.dc * ctx.srcFactor); },
     loadAc(stamp, ctx) {
       if (ctx.excitedSource === el.name) stamp.current(pos, neg, 1, 0);
