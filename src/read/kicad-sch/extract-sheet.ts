@@ -21,7 +21,7 @@ export function describeFirstForm(nodes: SNode[]): string {
   return t !== undefined ? `"${t.slice(0, 40)}"` : "a list without a keyword";
 }
 
-export function extractSheet(nodes: SNode[], file: string): ExtractResult {
+export function extractSheet(nodes: SNode[], text: string, file: string): ExtractResult {
   const root = nodes[0];
   if (root === undefined || keywordOf(root) !== "kicad_sch" || root.type !== "list") {
     const p = root ? where(root) : { line: 1, column: 1 };
@@ -71,7 +71,7 @@ export function extractSheet(nodes: SNode[], file: string): ExtractResult {
     if (item === undefined || item.type !== "list") continue;
     switch (keywordOf(item)) {
       case "lib_symbols": sheet.lib = extractLibSymbols(item, version, file, notes); break;
-      case "symbol": { const s = readPlacedSymbol(item, version, file, notes); if (s) sheet.symbols.push(s); break; }
+      case "symbol": { const s = readPlacedSymbol(item, version, file, text, notes); if (s) sheet.symbols.push(s); break; }
       case "wire": readSegments(item, sheet.wires, note); break;
       case "bus": readSegments(item, sheet.buses, note); break;
       case "bus_entry": readBusEntry(item, sheet.busEntries, note); break;
@@ -81,7 +81,7 @@ export function extractSheet(nodes: SNode[], file: string): ExtractResult {
       case "global_label":
       case "hierarchical_label": { const l = readLabel(item, note); if (l) sheet.labels.push(l); break; }
       case "sheet": { const s = readSheet(item, note); if (s) sheet.sheets.push(s); break; }
-      case "symbol_instances": readSymbolInstances(item, version, sheet.symbolInstances); break;
+      case "symbol_instances": readSymbolInstances(item, version, text, sheet.symbolInstances); break;
       case "bus_alias": readBusAlias(item, sheet.busAliases); break;
       default: break; // graphics, text, title block, embedded files: nothing to connect
     }

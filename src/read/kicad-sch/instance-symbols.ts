@@ -19,13 +19,25 @@ export interface ResolvedSymbol {
   onBoard: boolean;
 }
 
+const sheetPathKeys = new WeakMap<SheetInstance, { v7: string; v6Prefix: string }>();
+
+/** The instance's path keys: `/rootuuid/sheetuuid…` (v7+) and `/sheetuuid…/` (v6, + symbol uuid). */
+function pathKeys(inst: SheetInstance, root: SheetData): { v7: string; v6Prefix: string } {
+  let keys = sheetPathKeys.get(inst);
+  if (!keys) {
+    keys = { v7: "/" + [root.uuid, ...inst.uuidPath].join("/"), v6Prefix: "/" + inst.uuidPath.map((u) => `${u}/`).join("") };
+    sheetPathKeys.set(inst, keys);
+  }
+  return keys;
+}
+
 export function resolveSymbol(sym: PlacedSymbol, inst: SheetInstance, root: SheetData): ResolvedSymbol {
-  const sheetPath = "/" + [root.uuid, ...inst.uuidPath].join("/");
+  const keys = pathKeys(inst, root);
   // Which file holds the instance data matters for the Value span a fix will edit.
-  let data: InstanceData | undefined = sym.instances.get(sheetPath);
+  let data: InstanceData | undefined = sym.instances.size > 0 ? sym.instances.get(keys.v7) : undefined;
   let dataFile = inst.sheet.file;
   if (!data) {
-    data = root.symbolInstances.get("/" + [...inst.uuidPath, sym.uuid].join("/"));
+    data = root.symbolInstances.size > 0 ? root.symbolInstances.get(keys.v6Prefix + sym.uuid) : undefined;
     dataFile = root.file;
   }
   if (!data) {

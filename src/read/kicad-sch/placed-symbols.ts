@@ -1,14 +1,14 @@
 // One placed `(symbol …)` item of a sheet (KiCad format notes §6): library link, placement,
 // unit, properties, flags, alternates and the per-instance data of KiCad 7+ files.
 import type { ReadNote } from "../../circuit/types.js";
-import { argNumber, argText, childOf, childrenOf, flagOf, where, type SList } from "../sexpr.js";
+import { argNumber, argText, childOf, childrenOf, flagOf, tokenEnd, where, type SList } from "../sexpr.js";
 import { unescapeKicad } from "./escapes.js";
 import { inRange, quarterTurn, toGrid, type Mirror } from "./geometry.js";
 import { readProperty } from "./properties.js";
 import type { InstanceData, PlacedSymbol } from "./sheet-data.js";
 import { fieldText } from "./versions.js";
 
-export function readPlacedSymbol(sym: SList, version: number, file: string, notes: ReadNote[]): PlacedSymbol | undefined {
+export function readPlacedSymbol(sym: SList, version: number, file: string, text: string, notes: ReadNote[]): PlacedSymbol | undefined {
   const pos = where(sym);
   const note = (message: string): void => { notes.push({ file, line: pos.line, column: pos.column, message }); };
   const rawLibId = argText(childOf(sym, "lib_id"), 1);
@@ -35,16 +35,16 @@ export function readPlacedSymbol(sym: SList, version: number, file: string, note
   for (const propList of childrenOf(sym, "property")) {
     const prop = readProperty(propList);
     if (!prop) continue;
-    const text = fieldText(prop.value, version);
+    const shown = fieldText(prop.value, version);
     switch (prop.name.toLowerCase()) {
-      case "reference": reference = text; break;
+      case "reference": reference = shown; break;
       case "value":
-        value = text;
-        valueSpan = { start: prop.valueNode.location.start.offset, end: prop.valueNode.location.end.offset };
+        value = shown;
+        valueSpan = { start: prop.valueNode.location.start.offset, end: tokenEnd(prop.valueNode, text) };
         break;
-      case "footprint": footprint = text; break;
+      case "footprint": footprint = shown; break;
       // A repeated user field overwrites the earlier one, as the editor does on load.
-      default: fields[prop.name] = text;
+      default: fields[prop.name] = shown;
     }
   }
 
@@ -60,7 +60,7 @@ export function readPlacedSymbol(sym: SList, version: number, file: string, note
     for (const project of childrenOf(inst, "project")) {
       for (const path of childrenOf(project, "path")) {
         const p = argText(path, 1);
-        if (p !== undefined) instances.set(p.toLowerCase(), readInstanceData(path, version));
+        if (p !== undefined) instances.set(p.toLowerCase(), readInstanceData(path, version, text));
       }
     }
   }
@@ -90,12 +90,12 @@ export function readPlacedSymbol(sym: SList, version: number, file: string, note
     column: pos.column,
   };
   if (valueSpan) out.valueSpan = valueSpan;
-  if (defaultList) out.defaultInstance = readInstanceData(defaultList, version);
+  if (defaultList) out.defaultInstance = readInstanceData(defaultList, version, text);
   return out;
 }
 
 /** `(path … (reference "R5") (unit 1) (value "10k") (footprint "…"))` or a `default_instance`. */
-export function readInstanceData(list: SList, version: number): InstanceData {
+export function readInstanceData(list: SList, version: number, text: string): InstanceData {
   const data: InstanceData = {};
   const reference = argText(childOf(list, "reference"), 1);
   if (reference !== undefined) data.reference = reference;
@@ -105,7 +105,7 @@ export function readInstanceData(list: SList, version: number): InstanceData {
   const valueNode = valueList?.content[1];
   if (valueNode !== undefined && valueNode.type !== "list") {
     data.value = fieldText(valueNode.content, version);
-    data.valueSpan = { start: valueNode.location.start.offset, end: valueNode.location.end.offset };
+    data.valueSpan = { start: valueNode.location.start.offset, end: tokenEnd(valueNode, text) };
   }
   const footprint = argText(childOf(list, "footprint"), 1);
   if (footprint !== undefined) data.footprint = fieldText(footprint, version);

@@ -43,6 +43,6 @@ export function sheetFromTree(fs: FileSource, tree: SexprTree, file: string, rea
 }
 
 function fromTree(tree: SexprTree, file: string, real: string): SheetResult {
-  const extracted = extractSheet(tree.nodes, file);
+  const extracted = extractSheet(tree.nodes, tree.text, file);
   return extracted.ok ? { ok: true, sheet: extracted.sheet, real } : extracted;
 }

@@ -119,10 +119,10 @@ export function readSheet(item: SList, note: Note): SheetRef | undefined {
 }
 
 /** v6 root `(symbol_instances (path "/…/uuid" (reference …) (unit …) (value …) (footprint …)) …)`. */
-export function readSymbolInstances(item: SList, version: number, out: Map<string, InstanceData>): void {
+export function readSymbolInstances(item: SList, version: number, text: string, out: Map<string, InstanceData>): void {
   for (const path of childrenOf(item, "path")) {
     const p = argText(path, 1);
-    if (p !== undefined) out.set(p.toLowerCase(), readInstanceData(path, version));
+    if (p !== undefined) out.set(p.toLowerCase(), readInstanceData(path, version, text));
   }
 }
 
