@@ -36,6 +36,9 @@ export interface LintInputs {
   cwd?: string;
   /** Rules to run instead of every rule (tests). */
   rules?: readonly Rule<Context>[];
+  /** Called with each design's Context after its rules ran: commands that report figures rather
+   * than findings (`bias`) share the reading, config lookup and error handling of `lint`. */
+  visit?: (ctx: Context, design: DesignReport) => void;
 }
 
 /** Plain file paths only: every path is taken as a file, and the reader reports it if it is not. */
@@ -146,7 +149,7 @@ export function lint(inputs: LintInputs): LintResult {
       continue;
     }
     bandConfig ??= choice.config;
-    designs.push(checkDesign(file, choice, fs, rules));
+    designs.push(checkDesign(file, choice, fs, rules, inputs.visit));
   }
   return {
     designs,
@@ -181,7 +184,7 @@ function failedDesign(file: string, message: string, line = 0, column = 0): Desi
   return { file, sheetFiles: [file], findings: [], rails: [], bases: [], devices: [], errors: [{ file, line, column, message }] };
 }
 
-function checkDesign(file: string, choice: ConfigChoice, fs: FileSource, rules: readonly Rule<Context>[]): DesignReport {
+function checkDesign(file: string, choice: ConfigChoice, fs: FileSource, rules: readonly Rule<Context>[], visit?: LintInputs["visit"]): DesignReport {
   const read = readDesign(file, { fs });
   if (!read.ok) return failedDesign(read.error.file, read.error.message, read.error.line, read.error.column);
   const circuit = read.circuit;
@@ -199,7 +202,7 @@ function checkDesign(file: string, choice: ConfigChoice, fs: FileSource, rules: 
   const findings = applySuppressions(outcome.findings, circuit.parts).sort(compareFindings);
   for (const p of suppressionProblems(circuit.parts, rules.map((r) => r.id))) notes.push(p);
   const sheetFiles = [...new Set([circuit.file, ...circuit.sheets.map((s) => s.file)])];
-  return {
+  const design: DesignReport = {
     file,
     sheetFiles,
     findings,
@@ -209,5 +212,7 @@ function checkDesign(file: string, choice: ConfigChoice, fs: FileSource, rules: 
     errors: outcome.problems,
     ...(notes.length > 0 ? { notes } : {}),
   };
+  visit?.(ctx, design);
+  return design;
 }
 
