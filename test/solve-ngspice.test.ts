@@ -52,8 +52,9 @@ function ours(op: OperatingPoint, vector: string): number | undefined {
   const polarity = dev.kind === "bjt" ? (dev.type === "pnp" ? -1 : 1) : dev.kind === "jfet" ? (dev.type === "pjfet" ? -1 : 1) : dev.kind === "mosfet" ? (dev.type === "pmos" ? -1 : 1) : 1;
   const table: Record<string, number | undefined> = {};
   if (dev.kind === "bjt") Object.assign(table, { ic: polarity * dev.ic, ib: polarity * dev.ib, gm: dev.gm, gpi: dev.gpi, go: dev.go, cpi: dev.cpi, cmu: dev.cmu });
-  if (dev.kind === "jfet") Object.assign(table, { id: polarity * dev.id, gm: dev.gm, gds: dev.gds });
-  // ngspice's MOSFET reports its drain current already polarity-normalised (as we do), its von physically.
+  // ngspice's JFET and MOSFET report the drain current already polarity-normalised (as we do),
+  // the MOSFET's von physically.
+  if (dev.kind === "jfet") Object.assign(table, { id: dev.id, gm: dev.gm, gds: dev.gds });
   if (dev.kind === "mosfet") Object.assign(table, { id: dev.id, gm: dev.gm, gds: dev.gds, gmbs: dev.gmbs, von: polarity * dev.vth, cgs: dev.cgs, cgd: dev.cgd });
   if (dev.kind === "diode") Object.assign(table, { id: dev.id, gd: dev.gd });
   return table[param];
@@ -143,6 +144,7 @@ describe("ngspice reference: DC operating points", () => {
     "diodes_zener_shunt",
     "schmitt_bistable_re100",
     "schmitt_bistable_re1k",
+    "operating_regions",
   ];
   for (const name of decks) {
     it(`${name}: node voltages, device currents and small-signal parameters match`, () => {
@@ -150,6 +152,27 @@ describe("ngspice reference: DC operating points", () => {
       for (const run of referenceRuns(name)) checkOperatingPoint(op, run.data, `${name} (${run.label})`);
     });
   }
+});
+
+describe("operating-region labels on the regions board", () => {
+  it("labels saturation, reverse-active, cut-off, reversed channels and reverse bias as a practitioner would", () => {
+    const { op } = solveDeck("operating_regions");
+    const region = (name: string): string | undefined => {
+      const d = op.devices[name];
+      return d && "region" in d ? d.region : undefined;
+    };
+    expect(region("q1")).toBe("saturation");
+    expect(region("q2")).toBe("reverse");
+    expect(region("q3")).toBe("cut-off");
+    expect(region("q4")).toBe("saturation");
+    expect(region("m1")).toBe("triode");
+    expect(region("j1")).toBe("triode");
+    expect(region("d1")).toBe("reverse");
+    expect(region("j5")).toBe("saturation");
+    // Practitioner signs: the saturated PNP reads positive VCE and IC like the NPN.
+    const q4 = op.devices["q4"];
+    expect(q4?.kind === "bjt" && q4.vce > 0 && q4.ic > 0).toBe(true);
+  });
 });
 
 describe("ngspice reference: circuits plain Newton cannot solve", () => {

@@ -73,9 +73,9 @@ const PIVOT_TOLERANCE = 0.1;
 const REFACTOR_TOLERANCE = 1e-3;
 
 class SlotTape {
-  rows: Int32Array = new Int32Array(256);
-  cols: Int32Array = new Int32Array(256);
-  slots: Int32Array = new Int32Array(256);
+  rows: Int32Array = new Int32Array(64);
+  cols: Int32Array = new Int32Array(64);
+  slots: Int32Array = new Int32Array(64);
   length = 0;
   record(position: number, row: number, col: number, slot: number): void {
     if (position >= this.rows.length) {

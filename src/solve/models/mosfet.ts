@@ -240,27 +240,39 @@ export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
         vds = t * (voltageOf(x, dp) - voltageOf(x, sp));
         vbs = t * (voltageOf(x, b) - voltageOf(x, sp));
         if (ctx.mode === "normal") {
-          const rawVgs = vgs, rawVds = vds;
-          let vgd = vgs - vds;
+          // Limit the gate step on whichever terminal acts as source, then the drain step.
+          // Compare each limiter's own input and output: recombining vgs = vgd + vds would
+          // differ by rounding and look like a limited step forever.
+          const vgd = vgs - vds;
           const vgdOld = s.vgs - s.vds;
+          let changed = false;
           if (s.vds >= 0) {
-            vgs = fetlim(vgs, s.vgs, s.von);
-            vds = vgs - vgd;
-            vds = limvds(vds, s.vds);
-            vgd = vgs - vds;
+            const g1 = fetlim(vgs, s.vgs, s.von);
+            const d0 = g1 - vgd;
+            const d1 = limvds(d0, s.vds);
+            if (g1 !== vgs || d1 !== d0) {
+              changed = true;
+              vgs = g1;
+              vds = d1;
+            }
           } else {
-            vgd = fetlim(vgd, vgdOld, s.von);
-            vds = vgs - vgd;
-            vds = -limvds(-vds, -s.vds);
-            vgs = vgd + vds;
+            const g1 = fetlim(vgd, vgdOld, s.von);
+            const d0 = -(vgs - g1);
+            const d1 = limvds(d0, -s.vds);
+            if (g1 !== vgd || d1 !== d0) {
+              changed = true;
+              vds = -d1;
+              vgs = g1 + vds;
+            }
           }
+          if (changed) ctx.limited = true;
           if (vds >= 0) {
             vbs = pnjlim(vbs, s.vbs, THERMAL_VOLTAGE, k.vcrit, ctx);
           } else {
-            const vbd = pnjlim(vbs - vds, s.vbs - s.vds, THERMAL_VOLTAGE, k.vcrit, ctx);
-            vbs = vbd + vds;
+            const vbd = vbs - vds;
+            const limited = pnjlim(vbd, s.vbs - s.vds, THERMAL_VOLTAGE, k.vcrit, ctx);
+            if (limited !== vbd) vbs = limited + vds;
           }
-          if (vgs !== rawVgs || vds !== rawVds) ctx.limited = true;
         }
       }
       s.vgs = vgs;

@@ -15,25 +15,45 @@ export interface ParamSpec {
 
 export type ResolvedParams = Readonly<Record<string, number>>;
 
-const tableDefaults = new WeakMap<readonly ParamSpec[], Readonly<Record<string, number>>>();
+interface ResolvedEntry {
+  /** The card's parameter values when resolved, to notice a card edited in place. */
+  seen: Array<[string, number]>;
+  resolved: ResolvedParams;
+}
 
-/** The card's parameters over the table's defaults (upper-case SPICE names). */
-export function resolveParams(card: ModelCard, table: readonly ParamSpec[]): ResolvedParams {
-  let defaults = tableDefaults.get(table);
-  if (!defaults) {
-    const d: Record<string, number> = {};
-    for (const spec of table) d[spec.name] = spec.default;
-    defaults = Object.freeze(d);
-    tableDefaults.set(table, defaults);
+const resolvedCache = new WeakMap<readonly ParamSpec[], WeakMap<ModelCard, ResolvedEntry>>();
+
+function stillMatches(card: ModelCard, seen: Array<[string, number]>): boolean {
+  let count = 0;
+  for (const key in card.params) {
+    const entry = seen[count++];
+    if (!entry || entry[0] !== key || !Object.is(entry[1], card.params[key])) return false;
   }
-  const resolved: Record<string, number> = { ...defaults };
+  return count === seen.length;
+}
+
+/**
+ * The card's parameters over the table's defaults (upper-case SPICE names). Cards are shared by
+ * many elements, so the result is cached per card and re-checked against the card's values.
+ */
+export function resolveParams(card: ModelCard, table: readonly ParamSpec[]): ResolvedParams {
+  let perCard = resolvedCache.get(table);
+  if (!perCard) resolvedCache.set(table, (perCard = new WeakMap()));
+  const cached = perCard.get(card);
+  if (cached && stillMatches(card, cached.seen)) return cached.resolved;
+  const resolved: Record<string, number> = {};
+  for (const spec of table) resolved[spec.name] = spec.default;
+  const seen: Array<[string, number]> = [];
   for (const key in card.params) {
     const given = card.params[key];
+    seen.push([key, given as number]);
     // Cards should already be upper case (netlist.ts); a stray "Is" or "vaf" still counts.
     const name = key.toUpperCase();
     if (given !== undefined && Number.isFinite(given) && name in resolved) resolved[name] = given;
   }
-  return resolved;
+  const frozen = Object.freeze(resolved);
+  perCard.set(card, { seen, resolved: frozen });
+  return frozen;
 }
 
 /** Whether the card sets the parameter (SPICE distinguishes "given" from "default" for a few). */
