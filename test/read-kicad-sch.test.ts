@@ -335,4 +335,17 @@ describe("more constructs", () => {
       ["R3", 'model library "${KIPRJMOD}/models/none.lib" not read: no such file'],
     ]);
   });
+
+  it("labels attach to the interior of 45° and free-angle wires too (§8.2 rule 5)", () => {
+    const c = read(schematic([
+      place({ lib: "Device:R", ref: "R1", x: 50.8, y: 50.8 }), // pin 1 at (50.8, 46.99)
+      wire(50.8, 46.99, 60.96, 57.15), // 45°
+      label("DIAG", 55.88, 52.07),
+      place({ lib: "Device:R", ref: "R2", x: 101.6, y: 50.8 }), // pin 1 at (101.6, 46.99)
+      wire(101.6, 46.99, 121.92, 57.15), // slope 1/2
+      label("SLANT", 111.76, 52.07),
+    ]));
+    expect(netOf(c, "R1", "1")).toBe("/DIAG");
+    expect(netOf(c, "R2", "1")).toBe("/SLANT");
+  });
 });

@@ -13,7 +13,9 @@ import { keywordOf, textOf, where } from "./sexpr.js";
 
 export { memoryFileSource, nodeFileSource, type FileSource };
 export { MAX_FILE_BYTES, MAX_NESTING_DEPTH } from "./sexpr.js";
-export { MAX_SHEET_DEPTH, MAX_SHEET_INSTANCES } from "./kicad-sch/hierarchy.js";
+export { MAX_DESIGN_ITEMS, MAX_SHEET_DEPTH, MAX_SHEET_INSTANCES } from "./kicad-sch/hierarchy.js";
+export { MAX_BUS_MEMBERS_PER_DESIGN } from "./kicad-sch/design-graph.js";
+export { MAX_FREE_ANGLE_SEGMENTS } from "./kicad-sch/segment-index.js";
 export { MAX_BUS_MEMBERS } from "./kicad-sch/buses.js";
 export { MAX_COORDINATE } from "./kicad-sch/geometry.js";
 

@@ -14,6 +14,10 @@ import type { LibSymbol, SheetData } from "./sheet-data.js";
 import { UnionFind } from "./union-find.js";
 import { POWER_NAME_FROM_VALUE } from "./versions.js";
 
+/** Bus members expanded over a whole design (each bus label of width w costs w); further bus
+ * names are read as plain names once the budget is spent. */
+export const MAX_BUS_MEMBERS_PER_DESIGN = 1_000_000;
+
 export const FLAG_NO_CONNECT = 1;
 export const FLAG_POWER = 2;
 export const FLAG_GROUND = 4;
@@ -77,6 +81,16 @@ export function buildDesignGraph(instances: SheetInstance[], root: SheetData): D
   const unannotatedCount = new Map<string, number>();
   const bases: number[] = [];
   const notedPins = new Set<string>();
+  let busBudget = MAX_BUS_MEMBERS_PER_DESIGN;
+  let busBudgetNoted = false;
+  const spendBus = (bus: BusName, file: string, line: number, column: number): boolean => {
+    if (bus.members.length <= busBudget) { busBudget -= bus.members.length; return true; }
+    if (!busBudgetNoted) {
+      busBudgetNoted = true;
+      notes.push({ file, line, column, message: `more than ${MAX_BUS_MEMBERS_PER_DESIGN} bus members in the design; this and later bus names are not expanded` });
+    }
+    return false;
+  };
 
   for (const inst of instances) {
     const sheet = inst.sheet;
@@ -187,7 +201,7 @@ export function buildDesignGraph(instances: SheetInstance[], root: SheetData): D
     sheet.labels.forEach((label, i) => {
       const bus = g.labelBus[i];
       const cls = g.busClassOfLabel[i] ?? -1;
-      if (!bus || cls < 0) return;
+      if (!bus || cls < 0 || !spendBus(bus, sheet.file, label.line, label.column)) return;
       const global = label.kind === "global";
       pushBus(busItems, cls, {
         bus, space: global ? "G" : local, depth: inst.depth, rank: 0, prefix: global ? "" : inst.namePath, alias: true,
@@ -209,6 +223,7 @@ export function buildDesignGraph(instances: SheetInstance[], root: SheetData): D
         }
         const bus = g.sheetPinBus[si]?.[pi];
         if (bus) {
+          if (!spendBus(bus, sheet.file, pin.line, pin.column)) return;
           const cls = g.busClassOfSheetPin[si]?.[pi] ?? -1;
           if (cls >= 0) {
             pushBus(busItems, cls, { bus, space: local, priority: PRIORITY.sheetPin, depth: inst.depth,

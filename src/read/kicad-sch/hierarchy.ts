@@ -14,6 +14,14 @@ export const MAX_SHEET_DEPTH = 32;
  * many copies of itself into an exponential tree). */
 export const MAX_SHEET_INSTANCES = 10_000;
 
+/** Most symbols, labels and wires one design may expand to over all its sheet instances (a sheet
+ * file used many times multiplies its contents; this bounds the work a small input can demand). */
+export const MAX_DESIGN_ITEMS = 5_000_000;
+
+function itemCount(s: SheetData): number {
+  return s.symbols.length + s.labels.length + (s.wires.length >> 2) + (s.buses.length >> 2) + s.sheets.length;
+}
+
 export interface SheetInstance {
   index: number;
   sheet: SheetData;
@@ -52,6 +60,7 @@ export function buildHierarchy(fs: FileSource, root: SheetData, rootReal: string
     dnp: false, excludeFromSim: false, onBoard: true,
   }];
   const openFiles: string[] = [rootReal];
+  let items = itemCount(root);
   const expand = (instIndex: number): ReadError | undefined => {
     const inst = instances[instIndex];
     if (!inst) return undefined;
@@ -76,6 +85,10 @@ export function buildHierarchy(fs: FileSource, root: SheetData, rootReal: string
       }
       const loaded = loadSheet(fs, path);
       if (!loaded.ok) return loaded.error;
+      items += itemCount(loaded.sheet);
+      if (items > MAX_DESIGN_ITEMS) {
+        return at(`${label}: the hierarchy expands to more than ${MAX_DESIGN_ITEMS} symbols, labels and wires over its sheet instances (the reader's limit)`);
+      }
       const child: SheetInstance = {
         index: instances.length,
         sheet: loaded.sheet,

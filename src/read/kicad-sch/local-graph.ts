@@ -4,7 +4,7 @@
 // per instance) and are attached later by looking their points up here.
 import { parseBusName, type BusName } from "./buses.js";
 import { pointKey } from "./geometry.js";
-import { SegmentIndex } from "./segment-index.js";
+import { MAX_FREE_ANGLE_SEGMENTS, SegmentIndex } from "./segment-index.js";
 import type { SheetData } from "./sheet-data.js";
 import { UnionFind } from "./union-find.js";
 
@@ -45,6 +45,10 @@ function buildLocalGraph(sheet: SheetData): LocalGraph {
   const segCount = segs.length >> 2;
   for (let i = 0; i < segCount; i++) uf.add();
   const index = new SegmentIndex(segs, (a, b) => { uf.union(a, b); });
+  if (index.overflow > 0) {
+    sheet.notes.push({ file: sheet.file, line: 0, column: 0,
+      message: `${index.overflow} wires at angles other than 0/45/90° beyond the first ${MAX_FREE_ANGLE_SEGMENTS} connect only at their ends (labels and junctions on their interior are not checked)` });
+  }
   const points = new Map<number, number>();
   const attach = (id: number, x: number, y: number): void => {
     const key = pointKey(x, y);

@@ -2,7 +2,11 @@
 // they lie on — horizontal (by y), vertical (by x), the two 45° diagonals (by x−y and x+y) — and
 // collinear segments on one line that overlap or touch are merged into one interval, reporting the
 // merge so the caller can join them (the editor merges overlapping collinear wires; KiCad format
-// notes §8.2 rule 7). Any other slope is rare and checked one by one.
+// notes §8.2 rule 7). Any other slope is rare and checked one by one, up to a bounded number.
+
+/** Free-angle segments per sheet checked for points on their interior; beyond this they still
+ * connect at their ends, and the caller is told how many were left out. */
+export const MAX_FREE_ANGLE_SEGMENTS = 2000;
 
 interface Row {
   starts: number[];
@@ -15,6 +19,8 @@ type Family = Map<number, Row>;
 export class SegmentIndex {
   private readonly families: Family[] = [new Map(), new Map(), new Map(), new Map()];
   private readonly general: number[] = [];
+  /** Free-angle segments left out of interior checks (over MAX_FREE_ANGLE_SEGMENTS). */
+  overflow = 0;
 
   /**
    * @param segs flat [x1, y1, x2, y2, …]; segment i gets id `i`.
@@ -31,7 +37,11 @@ export class SegmentIndex {
       else if (dx === 0) { family = 1; key = x1; lo = Math.min(y1, y2); hi = Math.max(y1, y2); }
       else if (dx === dy) { family = 2; key = x1 - y1; lo = Math.min(x1, x2); hi = Math.max(x1, x2); }
       else if (dx === -dy) { family = 3; key = x1 + y1; lo = Math.min(x1, x2); hi = Math.max(x1, x2); }
-      else { this.general.push(x1, y1, x2, y2, i); continue; }
+      else {
+        if (this.general.length / 5 < MAX_FREE_ANGLE_SEGMENTS) this.general.push(x1, y1, x2, y2, i);
+        else this.overflow++;
+        continue;
+      }
       const fam = raw[family] as Map<number, number[]>;
       let list = fam.get(key);
       if (!list) { list = []; fam.set(key, list); }
