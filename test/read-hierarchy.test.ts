@@ -4,7 +4,7 @@
 // editor's exported netlists of its demo projects); boards and values invented.
 import { describe, expect, it } from "vitest";
 import { findRootSheets, memoryFileSource } from "../src/read/index.js";
-import { LIB_R, label, place, schematic, sheet, wire } from "./helpers/kicad-snippets.js";
+import { LIB_DUAL_OPAMP, LIB_R, label, place, schematic, sheet, wire } from "./helpers/kicad-snippets.js";
 import { net, netLines, netOf, readMemory } from "./helpers/read-design.js";
 
 const ROOT_UUID = "10000000-0000-4000-8000-000000000000";
@@ -72,6 +72,30 @@ describe("one sheet file, two instances", () => {
     (property "Reference" "R1"`);
     const c = readMemory({ "p/amp.kicad_sch": rootText, "p/stage.kicad_sch": stage(20231120, instances) }, "p/amp.kicad_sch");
     expect(netLines(c)).toEqual(expectedTwoInstances);
+  });
+});
+
+describe("per-instance units (KiCad format notes §6.1, §10.3)", () => {
+  it("v6: the unit in the root's symbol_instances wins over a stale (unit 1) in the shared sheet", () => {
+    // Both op-amp sections are written (unit 1) in the sub-sheet; the root says unit 1 for one
+    // instance and unit 2 for the other, and only that reproduces the editor's netlist.
+    const opamp = "6a000000-0000-4000-8000-0000000000a1";
+    const half = schematic([
+      place({ lib: "Amp:Dual", ref: "U1", value: "TL072", x: 101.6, y: 50.8, unit: 1, uuid: opamp }),
+      label("OUT", 109.22, 50.8, "hierarchical_label"),
+    ], { libs: [LIB_DUAL_OPAMP] });
+    const top = schematic([
+      sheet("left", "half.kicad_sch", S1, 76.2, 40.64, [{ name: "OUT", x: 76.2, y: 46.99 }]),
+      sheet("right", "half.kicad_sch", S2, 127, 40.64, [{ name: "OUT", x: 127, y: 46.99 }]),
+      label("LEFT", 76.2, 46.99),
+      label("RIGHT", 127, 46.99),
+    ], { uuid: ROOT_UUID, tail: `(symbol_instances
+    (path "/${S1}/${opamp}" (reference "U1") (unit 1) (value "TL072") (footprint ""))
+    (path "/${S2}/${opamp}" (reference "U1") (unit 2) (value "TL072") (footprint "")))` });
+    const c = readMemory({ "u/top.kicad_sch": top, "u/half.kicad_sch": half }, "u/top.kicad_sch");
+    expect(c.parts).toHaveLength(1);
+    expect(c.parts[0]?.pins["1"]).toBe("/LEFT");
+    expect(c.parts[0]?.pins["7"]).toBe("/RIGHT");
   });
 });
 

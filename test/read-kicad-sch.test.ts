@@ -348,4 +348,23 @@ describe("more constructs", () => {
     expect(netOf(c, "R1", "1")).toBe("/DIAG");
     expect(netOf(c, "R2", "1")).toBe("/SLANT");
   });
+
+  it("unit-0 and style-0 pins are common; a body-style-2 pin appears only in De Morgan placements (§5, §6.2)", () => {
+    const lib = `(symbol "Test:Styled" (in_bom yes) (on_board yes)
+      (property "Reference" "U" (at 0 0 0)) (property "Value" "Styled" (at 0 0 0))
+      (pin passive line (at 0 5.08 270) (length 2.54) (name "COM") (number "9"))
+      (symbol "Styled_1_1" (pin input line (at -5.08 0 0) (length 2.54) (name "A") (number "1")))
+      (symbol "Styled_1_2" (pin input line (at -5.08 2.54 0) (length 2.54) (name "A") (number "1")))
+      (symbol "Styled_0_1" (pin no_connect line (at 5.08 0 180) (length 2.54) (name "NC") (number "5"))))`;
+    const c = read(schematic([
+      place({ lib: "Test:Styled", ref: "U1", x: 50.8, y: 50.8 }),
+      label("NORMAL", 45.72, 50.8),
+      place({ lib: "Test:Styled", ref: "U2", x: 101.6, y: 50.8, extra: " (convert 2)" }),
+      label("DEMORGAN", 96.52, 48.26),
+    ], { libs: [lib] }));
+    expect(c.parts.find((p) => p.ref === "U1")?.pins).toEqual({ "1": "/NORMAL", "5": "unconnected-(U1-Pad5)", "9": "Net-(U1-Pad9)" });
+    expect(c.parts.find((p) => p.ref === "U2")?.pins["1"]).toBe("/DEMORGAN");
+    expect(net(c, "unconnected-(U1-Pad5)")?.noConnect).toBe(true);
+  });
 });
+
