@@ -246,8 +246,8 @@ export class RealSystem {
       grown.set(this.values);
       this.values = grown;
     }
+    // Every CSC position belongs to exactly one slot, so the copy overwrites all of them.
     const csc = this.cscValues, map = pattern.slotToCsc, values = this.values;
-    csc.fill(0);
     const count = pattern.slotCount;
     for (let s = 0; s < count; s++) csc[map[s] as number] = values[s] as number;
     if (!(this.factored && !symbolicChanged && this.lu.refactor(pattern.csc, csc, REFACTOR_TOLERANCE))) {
@@ -364,8 +364,6 @@ export class ComplexSystem {
       const gi = new Float64Array(pattern.slotCount); gi.set(this.im); this.im = gi;
     }
     const cr = this.cscRe, ci = this.cscIm, map = pattern.slotToCsc;
-    cr.fill(0);
-    ci.fill(0);
     const count = pattern.slotCount;
     for (let s = 0; s < count; s++) {
       const p = map[s] as number;
