@@ -6,6 +6,8 @@
 import { describe, expect, it } from "vitest";
 import { acSweep, diagnoseTopology, solveOperatingPoint } from "../src/solve/index.js";
 import type { Element, ModelCard, SolverCircuit } from "../src/solve/netlist.js";
+import { parseDeck } from "./support/deck.js";
+import { readDeck } from "./support/ngspice.js";
 
 const circuit = (elements: Element[]): SolverCircuit => ({ title: "diagnosis", elements });
 const NPN: ModelCard = { name: "QT", type: "NPN", params: { IS: 1e-15, BF: 100 }, source: "test card" };
@@ -156,6 +158,18 @@ describe("solver caps and explanations", () => {
     expect(op.problem).toContain("stopped at the cap of 3 Newton iterations");
     // Without the cap the same circuit solves.
     expect(solveOperatingPoint(cascode()).converged).toBe(true);
+  });
+
+  it("explains a circuit that outlasts the cap: which strategy got how far, and which device kept limiting", () => {
+    // A bistable Schmitt trigger (deck schmitt_bistable_re1k) needs source stepping; capped at
+    // 150 iterations it stops inside gmin stepping.
+    const deck = parseDeck(readDeck("schmitt_bistable_re1k"), "schmitt_bistable_re1k.cir");
+    const op = solveOperatingPoint(deck.circuit, { maxIterations: 150 });
+    expect(op.converged).toBe(false);
+    expect(op.iterations).toBeLessThanOrEqual(150);
+    expect(op.problem).toMatch(/plain Newton: Newton's method did not settle \(q\d's junction steps were still being limited/);
+    expect(op.problem).toContain("gmin stepping: stalled at a node shunt of");
+    expect(op.problem).toContain("stopped at the cap of 150 Newton iterations");
   });
 
   it("stops at the time limit and says so", () => {

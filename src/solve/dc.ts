@@ -33,7 +33,7 @@ const DEFAULT_GMIN = 1e-12;
 
 /** Why a Newton run stopped without converging. */
 type NewtonFailure =
-  | { reason: "iterations"; worstUnknown: Unknown; worstStep: number }
+  | { reason: "iterations"; worstUnknown: Unknown; worstStep: number; stillLimiting?: string; unsettled?: string }
   | { reason: "singular"; unknown: Unknown }
   | { reason: "not-finite" }
   | { reason: "iteration-cap" }
@@ -59,6 +59,8 @@ class DcSolver {
   readonly ctx: DcLoadContext;
   private baseReady = false;
   private readonly varying: Device[];
+  /** Last device whose junction step was limited in the latest load, for the explanation. */
+  private lastLimiting: string | undefined;
 
   constructor(
     readonly elaborated: ElaboratedCircuit,
@@ -88,7 +90,14 @@ class DcSolver {
       this.baseReady = true;
     }
     this.system.beginFromBase();
-    for (const device of this.varying) device.loadDc(x, this.stamp, ctx);
+    this.lastLimiting = undefined;
+    for (const device of this.varying) {
+      const before: boolean = ctx.limited;
+      ctx.limited = false;
+      device.loadDc(x, this.stamp, ctx);
+      if (ctx.limited) this.lastLimiting = device.name;
+      ctx.limited ||= before;
+    }
     if (diagGmin > 0) {
       const info = this.elaborated.unknowns.info;
       for (let i = 0; i < info.length; i++) if (info[i]?.kind !== "branch") this.system.add(i, i, diagGmin);
@@ -116,15 +125,22 @@ class DcSolver {
       if (!finite) return { ok: false, iterations: iter + 1, reason: "not-finite" };
       [this.x, this.xNew] = [this.xNew, this.x];
       const first = iter === 0 && run.firstMode === "init-junction";
-      if (!first && !limited && worstRatio <= 1 && this.devicesSettled()) return { ok: true, iterations: iter + 1 };
-      if (iter === run.limit - 1) return { ok: false, iterations: iter + 1, reason: "iterations", worstUnknown, worstStep };
+      const unsettled = !first && !limited && worstRatio <= 1 ? this.unsettledDevice() : "not checked";
+      if (!first && !limited && worstRatio <= 1 && unsettled === undefined) return { ok: true, iterations: iter + 1 };
+      if (iter === run.limit - 1) {
+        const failure: NewtonOutcome = { ok: false, iterations: iter + 1, reason: "iterations", worstUnknown, worstStep };
+        if (limited && this.lastLimiting !== undefined) failure.stillLimiting = this.lastLimiting;
+        if (unsettled !== undefined && unsettled !== "not checked") failure.unsettled = unsettled;
+        return failure;
+      }
     }
     return { ok: false, iterations: run.limit, reason: "iterations", worstUnknown: -1, worstStep: 0 };
   }
 
-  private devicesSettled(): boolean {
-    for (const device of this.elaborated.devices) if (device.converged && !device.converged(this.x)) return false;
-    return true;
+  /** Name of the first device whose currents are still moving beyond tolerance, if any. */
+  private unsettledDevice(): string | undefined {
+    for (const device of this.elaborated.devices) if (device.converged && !device.converged(this.x)) return device.name;
+    return undefined;
   }
 
   /** Evaluates every device exactly at the accepted solution so reports match the node voltages. */
@@ -224,9 +240,15 @@ function describeFailure(solver: DcSolver, failure: NewtonFailure | undefined): 
     case "deadline": return "stopped at the time limit";
     case "not-finite": return "the iterate overflowed (a device was driven to an absurd voltage)";
     case "singular": return `the matrix became singular at ${unknowns.describe(failure.unknown)}`;
-    case "iterations":
-      if (failure.worstUnknown < 0) return "Newton's method did not settle";
-      return `Newton's method did not settle; the largest change was still ${formatStep(failure.worstStep, unknowns.info[failure.worstUnknown]?.kind === "branch")} at ${unknowns.describe(failure.worstUnknown)}`;
+    case "iterations": {
+      const where: string[] = [];
+      if (failure.stillLimiting) where.push(`${failure.stillLimiting}'s junction steps were still being limited`);
+      if (failure.unsettled) where.push(`${failure.unsettled}'s currents were still changing`);
+      if (failure.worstUnknown >= 0) {
+        where.push(`the largest change was ${formatStep(failure.worstStep, unknowns.info[failure.worstUnknown]?.kind === "branch")} at ${unknowns.describe(failure.worstUnknown)}`);
+      }
+      return where.length ? `Newton's method did not settle (${where.join("; ")})` : "Newton's method did not settle";
+    }
   }
 }
 
