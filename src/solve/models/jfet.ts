@@ -4,7 +4,7 @@
 // depletion capacitances CGS/CGD with PB, M and FC.
 // Not modelled: ngspice's doping-tail parameter B (taken at its default 1, i.e. pure
 // Shichman–Hodges), recombination current ISR/NR, temperature coefficients.
-// N and M are honoured as PSpice-style cards intend them; ngspice's level-1 JFET has neither
+// N and M are honoured as cards written for other SPICE dialects use them; ngspice's level-1 JFET has neither
 // (ideal gate diodes, grading fixed at 0.5), so they match ngspice when left at their defaults.
 
 import { currentSettled, type Device } from "../device.js";
