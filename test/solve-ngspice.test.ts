@@ -9,7 +9,7 @@
 import { describe, expect, it } from "vitest";
 import { findCorner, impedanceToGround, solveOperatingPoint, transfer } from "../src/solve/index.js";
 import type { OperatingPoint, TransferPoint } from "../src/solve/index.js";
-import { parseDeck } from "./support/deck.js";
+import { parseDeck, spiceNumber } from "./support/deck.js";
 import {
   acFrequencies,
   acVector,
@@ -110,6 +110,12 @@ function relErr(a: number | null, b: number | null): number {
 }
 
 describe("ngspice harness", () => {
+  it("reads SPICE scale suffixes as the SPICE convention defines them (M is milli, MEG mega, MIL 25.4 µm)", () => {
+    const cases: Array<[string, number]> = [["4.7k", 4.7e3], ["10u", 10e-6], ["1Meg", 1e6], ["0.22222m", 0.22222e-3], ["6.734f", 6.734e-15], ["100pF", 100e-12], ["2mil", 50.8e-6], ["1e-15", 1e-15], [".75", 0.75]];
+    for (const [text, value] of cases) expect(Math.abs(spiceNumber(text, "test") / value - 1)).toBeLessThan(1e-12);
+    expect(() => spiceNumber("4k7", "deck.cir:3")).toThrow(/deck.cir:3: "4k7" is not a SPICE number/);
+  });
+
   it("recordings name the ngspice version that made them", () => {
     const rec = loadRecording("ce_9v_2n3904");
     expect(rec.ngspice).toMatch(/^ngspice-\d+/);
