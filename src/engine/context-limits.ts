@@ -93,7 +93,7 @@ export function partDissipation(part: Part, op: OperatingPoint, voltageOf: (net:
 
 export interface PowerRating {
   watts: number;
-  /** "Value/Power field", "0603 chip resistor, 1/10 W (common practice)". */
+  /** "the part's own rating, from its Value or Power field", "0603 chip resistor, 1/10 W: …". */
   basis: string;
   /** True when the figure is the default for an unknown package, not the part's own. */
   assumed: boolean;
@@ -123,16 +123,16 @@ const THT_WATTS = 1 / 4;
  */
 export function resistorPowerRating(part: Part, fallbackWatts: number): PowerRating {
   if (part.parsed.powerRating !== undefined) {
-    return { watts: part.parsed.powerRating, basis: "the part's own rating (Value or Power field)", assumed: false };
+    return { watts: part.parsed.powerRating, basis: "the part's own rating, from its Value or Power field", assumed: false };
   }
   const fp = part.footprint;
   for (const [code, watts, text] of CHIP_RESISTOR_WATTS) {
     if (new RegExp(`(^|[^0-9])${code}([^0-9]|$)`).test(fp)) {
-      return { watts, basis: `${code} chip resistor, ${text} (the usual rating for the size, common practice)`, assumed: false };
+      return { watts, basis: `${code} chip resistor, ${text}: the usual rating for the size, common practice`, assumed: false };
     }
   }
   if (/THT|Axial|DIN0\d{3}/i.test(fp)) {
-    return { watts: THT_WATTS, basis: "through-hole resistor, 1/4 W (the common size, common practice)", assumed: false };
+    return { watts: THT_WATTS, basis: "through-hole resistor, 1/4 W: the common size, common practice", assumed: false };
   }
   return { watts: fallbackWatts, basis: `no power rating or recognised footprint: ${fallbackWatts} W assumed`, assumed: true };
 }
