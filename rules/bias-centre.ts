@@ -11,7 +11,9 @@
  * on its DC load line, between the saturation edge (VCE(sat), or VDS(sat) = VGS − VTO) and the
  * cut-off end (the load's supply less the potential the emitter or source network returns to); a
  * position outside the allowed fraction of that span (25 %–75 % unless set) is a warning, with the
- * collector resistor that would centre it at the same current.
+ * collector resistor that would centre it at the same current. A device whose base or gate is
+ * driven over a DC path from a logic IC or a connector is taken as a switch (or biased from off the
+ * board) and not judged.
  *
  * ## Why it matters
  * A stage biased near one end of its load line clips one half of the waveform long before the
@@ -43,7 +45,7 @@ const ID = "bias-centre";
 
 const doc: RuleDoc = {
   what:
-    "Every transistor used as an amplifier (common emitter/base/collector, common source/gate/drain, both channels of a dual-gate MOSFET) must be in its amplifying region at the operating point — forward-active for a bipolar device, saturation (pinch-off) for a FET; saturation, cut-off or reverse (triode or cut-off) is an error. A common-emitter or common-source stage with a resistive load is placed on its DC load line, between the saturation edge (VCE(sat), or VDS(sat) = VGS − VTO) and the cut-off end (the load's supply less what the emitter or source network returns to); outside the allowed fraction of that span (25 %–75 % by default) is a warning, with the load resistor that would centre it at the same current.",
+    "Every transistor used as an amplifier (common emitter/base/collector, common source/gate/drain, both channels of a dual-gate MOSFET) must be in its amplifying region at the operating point — forward-active for a bipolar device, saturation (pinch-off) for a FET; saturation, cut-off or reverse (triode or cut-off) is an error. A common-emitter or common-source stage with a resistive load is placed on its DC load line, between the saturation edge (VCE(sat), or VDS(sat) = VGS − VTO) and the cut-off end (the load's supply less what the emitter or source network returns to); outside the allowed fraction of that span (25 %–75 % by default) is a warning, with the load resistor that would centre it at the same current. A device whose base or gate is DC-driven from a logic IC or a connector is taken as a switch and not judged.",
   why:
     "A stage biased near one end of its load line clips one half of the waveform long before the other: near saturation the negative peaks flatten, near cut-off the positive ones, and the asymmetry appears as even-order distortion and a gain that moves with signal level. A device in saturation or cut-off does not amplify at all — usually a divider resistor in the wrong place, a swapped value or an open bias path.",
   fix:
@@ -71,6 +73,24 @@ const options = {
   },
 };
 
+/** A device whose base or gate is driven over a DC path from a part the checker does not model (a
+ * logic IC) or from a connector is a switch or is biased from off the board: its region is set by a
+ * control signal the operating point cannot know, so it is not judged as an amplifier. */
+function drivenFromOutside(ctx: Context, stage: Stage): boolean {
+  const t = terminalsOf(stage.part.kind);
+  const controls = stage.type === "dual-gate-mosfet" ? ["G1", "G2"] : t ? [t.control] : [];
+  return controls.some((role) => {
+    const net = stage.nets[role];
+    if (net === undefined || ctx.isSupply(net)) return false;
+    return ctx.dcNetwork(net).nets.some((n) => !ctx.isSupply(n) && ctx.partsOn(n).some(({ part }) => part.kind === "other" || part.kind === "connector"));
+  });
+}
+
+/** Figures at numerical-noise level read as zero: under a microvolt, under a picoampere. */
+function shown(value: number, unit: string): string {
+  return si(Math.abs(value) < (unit === "V" ? 1e-6 : 1e-12) ? 0 : value, unit);
+}
+
 const AMPLIFYING_BJT = new Set(["active"]);
 const AMPLIFYING_FET = new Set(["saturation"]);
 
@@ -91,8 +111,8 @@ function regionFinding(ctx: Context, stage: Stage, device: DeviceOperatingPoint,
   const who = channel ? `${stage.ref} (gate-${channel === "g1" ? "1" : "2"} channel)` : stage.ref;
   const region = device.kind === "diode" ? device.region : device.region;
   const figures = device.kind === "bjt"
-    ? `VBE ${si(device.vbe, "V")}, VCE ${si(device.vce, "V")}, IC ${si(device.ic, "A")}`
-    : device.kind === "diode" ? "" : `VGS ${si(device.vgs, "V")}, VDS ${si(device.vds, "V")}, ID ${si(device.id, "A")}`;
+    ? `VBE ${shown(device.vbe, "V")}, VCE ${shown(device.vce, "V")}, IC ${shown(device.ic, "A")}`
+    : device.kind === "diode" ? "" : `VGS ${shown(device.vgs, "V")}, VDS ${shown(device.vds, "V")}, ID ${shown(device.id, "A")}`;
   const wanted = device.kind === "bjt" ? "forward-active" : "saturation (pinch-off)";
   const hint = region === "cut-off"
     ? "It carries no signal current: check that the base/gate bias reaches the device and the emitter/source returns to its supply."
@@ -164,7 +184,7 @@ export const biasCentre: Rule<Context> = {
   check(ctx, opts) {
     const low = numberOption(opts, "low", 0.25);
     const high = numberOption(opts, "high", 0.75);
-    const stages = ctx.stages().filter((s) => s.configuration !== "unknown");
+    const stages = ctx.stages().filter((s) => s.configuration !== "unknown" && !drivenFromOutside(ctx, s));
     if (stages.length === 0) return [];
     if (!ctx.operatingPoint()) {
       ctx.noteLimited(ID, `no operating point (${ctx.operatingPointProblem() ?? "not solved"}): bias not checked`, stages.map((s) => s.ref));

@@ -9,7 +9,8 @@
  * - where the gate can be reached from an external connector, an antenna or a coil input through
  *   coupling capacitors, resistors and inductors, a clamp: diodes or a zener from the gate (or a net
  *   on the way to it) to ground or a rail, or from gate to source, or protection built into the part
- *   (the parts library says which parts have it). Missing, a warning.
+ *   (the parts library says which parts have it; for a part it does not know, the symbol's
+ *   description may say so). Missing, a warning.
  * - its DC gate-source voltage at the operating point within the gate rating (VGS max, or the
  *   breakdown of built-in protection diodes): beyond it, an error. Where the gate reaches a rail
  *   through resistors, the rail alone is compared with the rating too: if it exceeds it, a fault or
@@ -51,7 +52,7 @@ const ESD =
 
 const doc: RuleDoc = {
   what:
-    "For every MOSFET gate (both gates of a dual-gate MOSFET): a DC path to a defined potential (resistors or inductors to ground, a rail, a source or another device's output) — a floating gate is an error naming the gate net and the part; where the gate can be reached from an external connector, antenna or coil input through capacitors, resistors and inductors, a clamp (diodes or a zener to ground or a rail, or gate to source, or protection built into the part, as the parts library records) — missing, a warning; the DC gate-source voltage at the operating point within the gate rating (VGS max, or the built-in diodes' breakdown) — beyond it, an error; and where the gate reaches a rail, the rail alone against the rating. For every junction FET, a gate junction forward-biased at the operating point (VGS above +0.5 V for an n-channel device unless set) is a warning.",
+    "For every MOSFET gate (both gates of a dual-gate MOSFET): a DC path to a defined potential (resistors or inductors to ground, a rail, a source or another device's output) — a floating gate is an error naming the gate net and the part; where the gate can be reached from an external connector, antenna or coil input through capacitors, resistors and inductors, a clamp (diodes or a zener to ground or a rail, or gate to source, or protection built into the part, as the parts library records or, for a part it does not know, the symbol's description states) — missing, a warning; the DC gate-source voltage at the operating point within the gate rating (VGS max, or the built-in diodes' breakdown) — beyond it, an error; and where the gate reaches a rail, the rail alone against the rating. For every junction FET, a gate junction forward-biased at the operating point (VGS above +0.5 V for an n-channel device unless set) is a warning.",
   why:
     "An insulated gate is a few picofarads with nothing to bleed its charge: floating, it drifts with leakage and static and takes the drain current with it, and a few tens of volts — less than a touch delivers — punch through the oxide. A gate wired to an antenna or an input socket meets exactly those charges. A forward-biased JFET gate draws current from the source, loads it and rectifies the signal.",
   fix:
@@ -173,18 +174,28 @@ function reachFromOutside(ctx: Context, gateNet: string): Reach | undefined {
   return undefined;
 }
 
-/** Diodes or zeners that clamp one of the nets: to ground or a rail, or from the gate to the source. */
+/** Diodes or zeners that clamp one of the nets: to ground or a rail, or from the gate to the source.
+ * A diode pair in one package (a series pair with its common pin on the net) counts by any other pin. */
 function clampsOn(ctx: Context, nets: readonly string[], gate: Gate): Part[] {
   const found = new Map<string, Part>();
   for (const net of nets) {
     for (const { part } of ctx.partsOn(net)) {
       if (part.kind !== "diode" && part.kind !== "zener") continue;
-      const other = otherNet(part, net);
-      if (other === undefined) continue;
-      if (ctx.isSupply(other) || (net === gate.net && other === gate.sourceNet)) found.set(part.ref, part);
+      const others = Object.values(part.pins).filter((n) => n !== net);
+      if (others.some((other) => ctx.isSupply(other) || (net === gate.net && other === gate.sourceNet))) found.set(part.ref, part);
     }
   }
   return [...found.values()].sort(byRef);
+}
+
+/** Built-in gate protection: the parts library's word first; for a part it does not know, the
+ * symbol's own description ("gate protection diodes inside"). */
+function builtInProtection(part: Part, ratings: PartRatings | undefined): { protected: boolean; basis: string } {
+  if (ratings?.gateProtection !== undefined) {
+    return { protected: ratings.gateProtection, basis: ratings.gateProtection ? "the parts library" : `the ${part.value || "part"} has no built-in gate protection` };
+  }
+  const said = Object.entries(part.fields).some(([k, v]) => /^(description|ki_description)$/i.test(k) && /gate[- ]?protect|protection diode/i.test(v));
+  return said ? { protected: true, basis: "the symbol's description" } : { protected: false, basis: "the part is not known to have built-in gate protection" };
 }
 
 /** The gate-source limit and what it is: the continuous VGS rating, else the breakdown of built-in
@@ -230,13 +241,14 @@ export const gateProtection: Rule<Context> = {
       }
 
       const ratings = ctx.rating(ref);
-      const builtIn = ratings?.gateProtection === true;
+      const protection = builtInProtection(gate.part, ratings);
+      const builtIn = protection.protected;
       const reach = reachFromOutside(ctx, gate.net);
       if (reach && !builtIn) {
         const clamps = clampsOn(ctx, reach.nets, gate);
         if (clamps.length === 0) {
           const route = reach.parts.length > 0 ? ` through ${reach.parts.map((p) => p.ref).join(", ")}` : " directly";
-          const known = ratings?.gateProtection === false ? `the ${gate.part.value || "part"} has no built-in gate protection` : "the part is not known to have built-in gate protection";
+          const known = protection.basis;
           findings.push(finding(ctx, ID, {
             at: gate.part,
             severity: "warning",

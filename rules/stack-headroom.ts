@@ -7,9 +7,10 @@
  * totem-pole bias stack, and the two channels of every dual-gate MOSFET, which is a cascode in one
  * package. For each device its headroom at the operating point: VCE − VCE(sat) (the part's rated
  * VCE(sat), else 0.2 V), or VDS − VDS(sat) with VDS(sat) = VGS − VTO (JFET) or VGS − VTH (MOSFET).
- * For the stack as a whole the largest undistorted peak swing at its output: toward the devices it
- * is the headroom of the device at the output (the others are held still by the cascode action),
- * away from them the DC drop across a resistive load (a choke lets the output rise above the rail,
+ * For the stack as a whole the largest undistorted peak swing at its output: toward the devices,
+ * until the first device reaches its saturation edge, each carrying its share of the swing (from
+ * the small-signal solution: nearly all of it across the output device, a few per cent across the
+ * lower ones, which the cascode holds still); away from them the DC drop across a resistive load (a choke lets the output rise above the rail,
  * so it sets no limit there). Each is compared with the configured signal swing (`swing`, 1 V peak
  * unless set), and the supply the stack would need for that swing at the same currents is given.
  *
@@ -22,9 +23,10 @@
  *
  * ## Example
  * A 9 V two-transistor cascode (divider 12 k/5.6 k/6.8 k, RE 1 k, RC 1.5 kΩ, 2N3904) sits at
- * VCE1 2.05 V and VCE2 2.66 V: headrooms 1.85 V and 2.46 V over a 0.2 V VCE(sat). Its output can
- * swing 2.46 V down before Q2 saturates and 2.56 V up before Q2 cuts off, so 2.46 V peak at most.
- * With `swing` set to 3 V the rule warns and says the stack would need about 9.98 V.
+ * VCE1 2.05 V and VCE2 2.66 V: headrooms 1.85 V and 2.46 V over a 0.2 V VCE(sat). Q2 carries 99 % of
+ * the output swing and Q1 about 1 %, so the output can swing 2.49 V down before Q2 saturates and
+ * 2.56 V up before Q2 cuts off: 2.49 V peak at most. With `swing` set to 3 V the rule warns and says
+ * the stack would need about 9.95 V.
  *
  * ## References
  * Cascode output swing limited by the upper device's saturation and the load: P. R. Gray and
@@ -45,7 +47,7 @@ const ID = "stack-headroom";
 
 const doc: RuleDoc = {
   what:
-    "For every stack of devices in series from a rail (cascodes, totem-pole bias stacks, and the two channels of every dual-gate MOSFET), computes each device's headroom at the operating point — VCE − VCE(sat) (the part's rated VCE(sat), else 0.2 V), or VDS − VDS(sat) with VDS(sat) = VGS − VTO (JFET) or VGS − VTH (MOSFET) — and the largest undistorted peak swing at the stack's output: toward the devices the output device's headroom, away from them the DC drop across a resistive load (a choke sets no limit). Compares each with the configured signal swing and gives the supply the stack would need at the same currents.",
+    "For every stack of devices in series from a rail (cascodes, totem-pole bias stacks, and the two channels of every dual-gate MOSFET), computes each device's headroom at the operating point — VCE − VCE(sat) (the part's rated VCE(sat), else 0.2 V), or VDS − VDS(sat) with VDS(sat) = VGS − VTO (JFET) or VGS − VTH (MOSFET) — and the largest undistorted peak swing at the stack's output: toward the devices, until the first reaches its saturation edge while carrying its small-signal share of the swing (nearly all across the output device in a cascode), away from them the DC drop across a resistive load (a choke sets no limit). Compares each with the configured signal swing and gives the supply the stack would need at the same currents.",
   why:
     "A stack spends voltage: each device needs its saturation voltage plus the swing, and the load needs the swing again. On a low rail the top device saturates on the signal's negative peaks, or the load cuts off on the positive ones, while the small-signal gain looks fine: the stage clips, intermodulation rises, and strong signals produce spurious responses.",
   fix:
@@ -57,7 +59,7 @@ const doc: RuleDoc = {
     "VCE(sat) 0.2 V where the part has no rating: the small-signal datasheet figure at IC 10 mA, IB 1 mA (2N3904 class), common practice",
   ],
   example:
-    "9 V cascode, divider 12 k/5.6 k/6.8 k, RE 1 k, RC 1.5 kΩ, 2N3904: VCE1 2.05 V, VCE2 2.66 V, headrooms 1.85 V and 2.46 V. The output swings 2.46 V down and 2.56 V up, so 2.46 V peak at most; with swing 3 V the rule warns that about 9.98 V would be needed.",
+    "9 V cascode, divider 12 k/5.6 k/6.8 k, RE 1 k, RC 1.5 kΩ, 2N3904: VCE1 2.05 V, VCE2 2.66 V, headrooms 1.85 V and 2.46 V; Q2 carries 99 % of the swing. The output swings 2.49 V down and 2.56 V up, so 2.49 V peak at most; with swing 3 V the rule warns that about 9.95 V would be needed.",
 };
 
 /** One position in a stack: a device, or one channel of a dual-gate MOSFET. */

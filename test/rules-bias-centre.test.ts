@@ -6,7 +6,8 @@ import { describe, expect, it } from "vitest";
 import { biasCentre } from "../rules/bias-centre.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
-import { rel, ruleFindings } from "./helpers/run-rule.js";
+import { kicadNetlist } from "../fixtures/rules/netlist-writer.js";
+import { rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
 import { opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/bias-centre");
@@ -74,6 +75,22 @@ describe("bias-centre JFET self-bias against Shockley's equation (Boylestad & Na
     expect(rel(num(f, "satVolts"), vdsSat)).toBeLessThan(1e-3);
     expect(rel(num(f, "fraction"), (vds - vdsSat) / (vdd - vdsSat))).toBeLessThan(0.01);
     expect(f?.message).toContain("triode (ohmic) edge");
+  });
+});
+
+describe("bias-centre: switches are not amplifiers", () => {
+  it("the 2N7000 gain switches of fixtures/hier-two-channel (gates from a logic latch through 10k) are not judged", () => {
+    const found = ruleFindings(biasCentre, join(process.cwd(), "fixtures/hier-two-channel/hier-two-channel.kicad_sch"));
+    expect(found.map((f) => f.message)).toEqual([]);
+  });
+
+  it("a MOSFET whose gate is DC-driven from a header is a switch; the same stage with only a pull-down is cut off", () => {
+    const stage = ["R3 +9V d 1k", "R4 s GND 100", "M1 d g s 2N7000", "R2 g GND 100k"];
+    const header = kicadNetlist("h", [...stage, "R1 ctl g 10k", "P1 ctl GND"]);
+    expect(ruleFindingsInMemory(biasCentre, { "/h/h.net": header }, "/h/h.net")).toEqual([]);
+    const [f] = ruleFindingsInMemory(biasCentre, { "/h/h.net": kicadNetlist("h", stage) }, "/h/h.net");
+    expect(f?.data.region).toBe("cut-off");
+    expect(f?.message).toContain("VGS 0 V");
   });
 });
 

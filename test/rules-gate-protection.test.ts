@@ -66,6 +66,25 @@ describe("gate-protection messages", () => {
   });
 });
 
+describe("gate-protection: built-in protection and diode pairs", () => {
+  const exposed = (part: string): string[] => ["R2 +12V g2 100k", "R3 g2 GND 100k", "R4 g1 GND 100k", "R5 s GND 100", "R1 +12V d 1k", part, "C3 in g1 1n", "P1 in GND"];
+
+  it("an unknown dual-gate part whose description states gate protection diodes passes", () => {
+    const lines = exposed("M1 d g2 g1 s DGX Description=tetrode,gate-protection-diodes-inside");
+    expect(ruleFindingsInMemory(gateProtection, { "/d/d.net": kicadNetlist("d", lines) }, "/d/d.net")).toEqual([]);
+  });
+
+  it("the same part without that statement is reported as not known to be protected", () => {
+    const [f] = ruleFindingsInMemory(gateProtection, { "/d/d.net": kicadNetlist("d", exposed("M1 d g2 g1 s DGX")) }, "/d/d.net");
+    expect(f?.message).toContain("not known to have built-in gate protection");
+  });
+
+  it("the dual-gate fixture board (overload diode pair at the input, protected part) gives nothing, as fixtures/README.md says", () => {
+    const found = ruleFindings(gateProtection, join(process.cwd(), "fixtures/dual-gate-cascode/dual-gate-cascode.kicad_sch"));
+    expect(found.map((f) => f.message)).toEqual([]);
+  });
+});
+
 describe("gate-protection on the clean board", () => {
   it("fixtures/clean/clean-preamp.kicad_sch gives no warning or error", () => {
     const found = ruleFindings(gateProtection, join(process.cwd(), "fixtures/clean/clean-preamp.kicad_sch"));
