@@ -52,6 +52,14 @@ describe("ratings figures against ngspice", () => {
     }
   });
 
+  it("2N7000 drain current and its drain resistor's V²/R (ratings_mosfet_2n7000.cir)", () => {
+    const found = ruleFindings(ratings, board("mosfet-overcurrent"));
+    for (const { label, data } of referenceRuns("ratings_mosfet_2n7000")) {
+      expect(rel(num(byPart(found, "M1"), "id"), opValue(data, "i(@m1[id])")), label).toBeLessThan(0.005);
+      expect(rel(num(byPart(found, "R3"), "watts"), (12 - opValue(data, "v(d)")) ** 2 / 47), label).toBeLessThan(0.005);
+    }
+  });
+
   it("1N4148 forward current (ratings_diode_1n4148.cir)", () => {
     const f = byPart(ruleFindings(ratings, board("diode-overcurrent")), "D1");
     for (const { label, data } of referenceRuns("ratings_diode_1n4148")) {
