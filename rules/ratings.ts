@@ -286,7 +286,7 @@ export const ratings: Rule<Context> = {
         findings.push(...deviceFindings(ctx, part, derating));
       }
     }
-    if (unrated.length > 0) ctx.noteLimited(ID, "no absolute maximum ratings known (not a built-in part): device limits not checked", unrated);
+    if (unrated.length > 0) ctx.noteLimited(ID, "no absolute maximum ratings known for parts outside the built-in library: device limits not checked", unrated);
     return findings;
   },
 };
