@@ -65,7 +65,9 @@ describe("the bundled Action with fix: true", () => {
   }
 
   it("reports as fixed exactly the files whose bytes changed, and nothing on the second run", () => {
-    const files = ["divider-crlf.kicad_sch", "two-channel/receiver.kicad_sch", "two-channel/channel.kicad_sch"];
+    // Every schematic under fixtures/fix: the Action lints the whole workspace.
+    const files = ["divider-crlf.kicad_sch", "two-channel/receiver.kicad_sch", "two-channel/channel.kicad_sch",
+      "two-channel-v6/receiver.kicad_sch", "two-channel-v6/channel.kicad_sch"];
     const first = runAction();
     expect(first.code).toBe(0);
     expect(first.stdout).toMatch(/loadline fix: (nothing to fix|\d+ value\(s\) changed)/);
