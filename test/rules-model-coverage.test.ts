@@ -28,8 +28,8 @@ describe("model-coverage", () => {
     const result = lint({ paths: ["/m/cascode-unknown.net"], fs: memoryFileSource({ "/m/cascode-unknown.net": text }) });
     const note = result.designs[0]?.findings.find((f) => f.rule === "model-coverage");
     expect(note?.data.unmodelled).toEqual(["Q2"]);
-    // Every rule that needs Q2's operating point says so: the grounding of its base, its place on
-    // the stack's headroom and its place on the load line (in the order the rules run).
+    // Every rule that needs Q2's operating point says so: the grounding of its base, the stack's
+    // headroom and its place on the load line (in the order the rules run).
     expect(note?.data.limitedRules).toEqual(["base-ac-ground", "stack-headroom", "bias-centre"]);
     expect(note?.message).toContain("base-ac-ground (Q2 not modelled");
   });
