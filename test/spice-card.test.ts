@@ -76,15 +76,16 @@ describe(".model cards", () => {
       ".model q9 PNP(BF=100 VAF={va} mfg=Invented)",
       ".model q9 PNP(BF=200)",
     ].join("\n");
-    const { models, notes } = parseModelCards(text);
+    const { models, notes, subcircuits } = parseModelCards(text);
     expect(models.map((m) => m.name)).toEqual(["q9"]);
+    // A .subckt block is read as a block (test/subckt.test.ts), not reported as unsupported.
+    expect(subcircuits.map((d) => [d.name, d.pins, d.problems.length])).toEqual([["OPAMP", ["1", "2", "3"], 0]]);
     expect(models[0]?.params).toEqual({ BF: 100 });
     const byLine = notes.map((n) => [n.line, n.message]);
     expect(byLine).toEqual([
       [1, "model m3: LEVEL=3: only LEVEL=1 (Shichman–Hodges) MOSFETs are supported"],
       [2, "model bsim: LEVEL=54: only LEVEL=1 (Shichman–Hodges) MOSFETs are supported"],
       [3, "model vd: type VDMOS is not supported (supported: D, NPN, PNP, NJF, PJF, NMOS and PMOS level 1)"],
-      [4, "subcircuit OPAMP is not supported: only .model cards are read"],
       [7, "model q1: 'AKO' cards (a kind of another model) are not supported"],
       [8, "model qv: LEVEL=4: only level 1 NPN models are supported"],
       [9, "model q9: cannot read VAF='{va}' as a number; ignored"],

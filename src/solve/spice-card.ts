@@ -1,10 +1,13 @@
 // `.model` cards from SPICE library text (a project's .lib, a Sim.Library file, the config's models).
 // Case-insensitive; `+` continues a line, `*` starts a comment line, `;` / ` $ ` an inline comment.
 // Parameters parenthesised or not, `NAME = value` with blanks allowed, SPICE number syntax.
-// Read: D, NPN, PNP, NJF, PJF (level 1) and NMOS, PMOS at LEVEL=1 (Shichman–Hodges). Anything else
-// (other levels, VDMOS, .subckt) is reported in `notes`, never silently dropped.
+// Read: D, NPN, PNP, NJF, PJF (level 1) and NMOS, PMOS at LEVEL=1 (Shichman–Hodges), and `.subckt`
+// blocks (their element lines read by subckt-syntax.ts, expanded by subckt-expand.ts). Anything else
+// (other levels, VDMOS, `.param`) is reported in `notes` or in the block's `problems`, never silently
+// dropped.
 import type { ModelCard, ModelType } from "./netlist.js";
 import { parseSpiceNumber } from "../circuit/spice-number.js";
+import { readSubcktHeader, readSubcktStatement, type SubcircuitDef } from "./subckt-syntax.js";
 
 export interface CardNote {
   /** 1-based line of the statement in the text. */
@@ -14,6 +17,7 @@ export interface CardNote {
 
 export interface ParsedModels {
   models: ModelCard[];
+  subcircuits: SubcircuitDef[];
   notes: CardNote[];
 }
 
@@ -114,17 +118,89 @@ function parseModelStatement(st: Statement, sourceName: string, notes: CardNote[
   return { name, type, params, source: `${sourceName}, line ${st.line}` };
 }
 
-/** Reads every `.model` card of a SPICE library text. `sourceName` says where the text came from
- * ("model library 'lib/rf.lib'"), and becomes each card's `source`. */
+/** Statements inside a `.subckt` block: element lines, `.model` cards (local to the block), and the
+ * dot-cards we cannot honour there. */
+class SubcktCollector {
+  readonly def: SubcircuitDef;
+  /** Depth of `.subckt` definitions written inside this one (not supported; skipped to their `.ends`). */
+  private nested = 0;
+  private readonly names = new Map<string, number>();
+
+  constructor(st: Statement, sourceName: string, private readonly notes: CardNote[]) {
+    const header = readSubcktHeader(st.text);
+    this.def = { name: header.name, pins: header.pins, statements: [], models: [], problems: [], ignored: [], line: st.line, source: sourceName };
+    if (header.problem) this.def.problems.push({ line: st.line, message: header.problem });
+  }
+
+  /** Takes one statement; true when it closed the block. */
+  take(st: Statement, first: string): boolean {
+    const def = this.def;
+    if (this.nested > 0) {
+      if (first === ".ends") this.nested--;
+      else if (first === ".subckt") this.nested++;
+      return false;
+    }
+    switch (first) {
+      case ".ends":
+        return true;
+      case ".subckt":
+        this.nested++;
+        def.problems.push({ line: st.line, message: `a subcircuit defined inside subcircuit ${def.name} is not supported; define it at the top level` });
+        return false;
+      case ".model": {
+        const card = parseModelStatement(st, def.source, this.notes);
+        if (card) def.models.push(card);
+        return false;
+      }
+      case ".param": case ".func": case ".include": case ".inc": case ".lib":
+        def.problems.push({ line: st.line, message: `'${first}' inside subcircuit ${def.name} is not supported (parameters and expressions are not evaluated, other files are not read)` });
+        return false;
+      default:
+        break;
+    }
+    if (first.startsWith(".")) {
+      def.ignored.push({ line: st.line, message: `'${first}' inside subcircuit ${def.name} has no effect on the operating point or the small-signal sweep; ignored` });
+      return false;
+    }
+    const read = readSubcktStatement(st.text, st.line);
+    if ("problem" in read) {
+      def.problems.push({ line: st.line, message: read.problem });
+      return false;
+    }
+    const earlier = this.names.get(read.statement.name);
+    if (earlier !== undefined) {
+      def.problems.push({ line: st.line, message: `${read.statement.name} is defined again in subcircuit ${def.name} (first at line ${earlier})` });
+      return false;
+    }
+    this.names.set(read.statement.name, st.line);
+    def.statements.push(read.statement);
+    for (const what of read.ignored) def.ignored.push({ line: st.line, message: `${read.statement.name}: ${what} ignored` });
+    return false;
+  }
+}
+
+/** Reads every `.model` card and `.subckt` block of a SPICE library text. `sourceName` says where the
+ * text came from ("model library 'lib/rf.lib'"), and becomes each card's `source`. */
 export function parseModelCards(text: string, sourceName = "model text"): ParsedModels {
   const models: ModelCard[] = [];
+  const subcircuits: SubcircuitDef[] = [];
   const notes: CardNote[] = [];
   const seen = new Map<string, number>();
-  let subckt: { name: string; line: number } | undefined;
+  const seenSubckt = new Map<string, number>();
+  let open: SubcktCollector | undefined;
   for (const st of statements(text)) {
     const first = (st.text.split(/\s+/)[0] ?? "").toLowerCase();
-    if (subckt) {
-      if (first === ".ends") subckt = undefined;
+    if (open) {
+      if (!open.take(st, first)) continue;
+      const def = open.def;
+      open = undefined;
+      const key = def.name.toUpperCase();
+      const earlier = seenSubckt.get(key);
+      if (earlier !== undefined) notes.push({ line: def.line, message: `subcircuit ${def.name} is defined again (first at line ${earlier}); the first is used` });
+      else {
+        seenSubckt.set(key, def.line);
+        subcircuits.push(def);
+      }
       continue;
     }
     switch (first) {
@@ -141,23 +217,23 @@ export function parseModelCards(text: string, sourceName = "model text"): Parsed
         models.push(card);
         break;
       }
-      case ".subckt": {
-        const name = st.text.split(/\s+/)[1] ?? "?";
-        subckt = { name, line: st.line };
-        notes.push({ line: st.line, message: `subcircuit ${name} is not supported: only .model cards are read` });
+      case ".subckt":
+        open = new SubcktCollector(st, sourceName, notes);
         break;
-      }
+      case ".ends":
+        notes.push({ line: st.line, message: "'.ends' without a '.subckt' before it; ignored" });
+        break;
       case ".lib": case ".endl": case ".end": case ".title":
         break;
       case ".include": case ".inc": case ".param":
-        notes.push({ line: st.line, message: `'${first}' is not followed; only .model cards in this text are read` });
+        notes.push({ line: st.line, message: `'${first}' is not followed; only .model cards and .subckt blocks in this text are read` });
         break;
       default:
-        notes.push({ line: st.line, message: `'${st.text.slice(0, 40)}' is not a .model card; ignored` });
+        notes.push({ line: st.line, message: `'${st.text.slice(0, 40)}' is not a .model card or inside a .subckt block; ignored` });
     }
   }
-  if (subckt) notes.push({ line: subckt.line, message: `subcircuit ${subckt.name} has no .ends` });
-  return { models, notes };
+  if (open) notes.push({ line: open.def.line, message: `subcircuit ${open.def.name} has no .ends; not used` });
+  return { models, subcircuits, notes };
 }
 
 /** The card named `name`, compared case-insensitively as SPICE does. */
