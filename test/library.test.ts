@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { LIBRARY_PARTS, findModel, zenerVoltageFromName } from "../src/solve/parts/library.js";
+import { LIBRARY_PARTS, findModel, zenerFromValue, zenerVoltageFromName, zenerVoltageFromValue } from "../src/solve/parts/library.js";
+import { DEFAULT_CHANNEL_SIZE } from "../src/solve/models/mosfet.js";
 
 const rel = (a: number | undefined, b: number, tol: number): void => {
   expect(a).toBeDefined();
@@ -115,12 +116,55 @@ describe("zeners by the voltage their name states", () => {
     rel(zenerVoltageFromName("1N4733A"), 5.1, 1e-12);
     rel(zenerVoltageFromName("1N4742A"), 12, 1e-12);
   });
-  it("findModel gives a zener card with BV at the stated voltage", () => {
+  it("findModel gives a zener card whose terminal voltage at IBV is the stated one: BV = VZ − IBV·RS (SPICE's IBV is the junction current at −BV)", () => {
     const z = findModel("BZX55C5V6");
     expect(z?.kind).toBe("zener");
     expect(z?.model.type).toBe("D");
-    rel(z?.model.params.BV, 5.6, 1e-12);
-    expect(z?.model.source).toMatch(/ESTIMATE/);
+    const p = z?.model.params ?? {};
+    rel((p.BV ?? 0) + (p.IBV ?? 0) * (p.RS ?? 0), 5.6, 1e-12);
+    // IZT 5 mA: the small glass zeners' test current [MEM].
+    rel(p.IBV, 5e-3, 1e-12);
+    expect(z?.model.source).toMatch(/^ESTIMATE: generic zener card by voltage/);
+    expect(z?.model.source).toMatch(/BV = VZ − IBV·RS = 5.6 V − 5 mA × 5 Ω = 5.575 V/);
+  });
+});
+
+describe("zeners by the voltage their Value states", () => {
+  const cases: [string, number][] = [
+    ["15V", 15], ["15 V", 15], ["6.2V", 6.2], ["6,2V", 6.2], ["5V6", 5.6], ["ZENER 6.2V", 6.2], ["ZENER_5V6", 5.6],
+    ["12V 500mW", 12], ["BZX55C15", 15], ["D_Zener", Number.NaN], ["1N4148", Number.NaN], ["", Number.NaN],
+  ];
+  it.each(cases)("'%s' → %d V", (value, volts) => {
+    const v = zenerVoltageFromValue(value);
+    if (Number.isNaN(volts)) expect(v).toBeUndefined();
+    else rel(v, volts, 1e-12);
+  });
+  it("the generic part says it is generic by voltage and claims no dissipation it cannot know", () => {
+    const z = zenerFromValue("15V");
+    expect(z?.model.source).toMatch(/generic zener card by voltage, VZ 15 V read from the Value '15V'/);
+    expect(z?.ratings.vz).toBe(15);
+    expect(z?.ratings.ptot).toBeUndefined();
+  });
+});
+
+describe("dual-gate gate capacitances (BF998 typicals Cg1ss 2.1 pF, Cg2ss 1.2 pF, Cdg1 25 fF, §4.4 [DOC])", () => {
+  it("are level-1 overlaps per metre of the solver's default W, so CGSO·W gives the datasheet figure back (±0.1 %)", () => {
+    const bf = findModel("BF998");
+    rel((bf?.model.params.CGSO ?? 0) * DEFAULT_CHANNEL_SIZE, 2.1e-12, 1e-3);
+    rel((bf?.model.params.CGDO ?? 0) * DEFAULT_CHANNEL_SIZE, 25e-15, 1e-3);
+    rel((bf?.gate2Model?.params.CGSO ?? 0) * DEFAULT_CHANNEL_SIZE, 1.2e-12, 1e-3);
+    // No TOX: level 1 then has no Meyer (channel) capacitance to add to the overlaps.
+    expect(bf?.model.params.TOX).toBeUndefined();
+    expect(bf?.gate2Model?.params.TOX).toBeUndefined();
+    // The d.c. figures are those of the gate-1 card (the channels differ only in capacitance).
+    for (const k of ["VTO", "KP", "LAMBDA"]) expect(bf?.gate2Model?.params[k]).toBe(bf?.model.params[k]);
+    expect(bf?.model.source).toMatch(/CGSO = 2\.1 pF \/ 100 µm = 21 nF\/m, CGDO = 25 fF \/ 100 µm = 0\.25 nF\/m/);
+  });
+  it("BF992: Cig1-s 4 pF and Crs 30 fF on gate 1 (§4.4 [DOC]); its gate 2 borrows the BF998's 1.2 pF and says so", () => {
+    const bf = findModel("BF992");
+    rel((bf?.model.params.CGSO ?? 0) * DEFAULT_CHANNEL_SIZE, 4e-12, 1e-3);
+    rel((bf?.model.params.CGDO ?? 0) * DEFAULT_CHANNEL_SIZE, 30e-15, 1e-3);
+    expect(bf?.gate2Model?.source).toMatch(/STAND-IN: the BF998's Cg2ss 1\.2 pF/);
   });
 });
 

@@ -4,6 +4,7 @@
 // Ratings are magnitudes (a PNP's VCEO of −40 V is stored as 40) in SI units.
 import type { PartKind } from "../../circuit/types.js";
 import type { ModelCard } from "../netlist.js";
+import { DEFAULT_CHANNEL_SIZE } from "../models/mosfet.js";
 
 export interface RatingRange {
   min?: number;
@@ -55,8 +56,11 @@ export interface LibraryPart {
   name: string;
   aliases: readonly string[];
   kind: PartKind;
-  /** For a dual-gate MOSFET: the card of each of its two channels. */
+  /** For a dual-gate MOSFET: the card of each of its two channels (of the gate-1 channel when
+   * `gate2Model` is given). */
   model: ModelCard;
+  /** For a dual-gate MOSFET whose gate-2 channel differs (its capacitances): that channel's card. */
+  gate2Model?: ModelCard;
   ratings: PartRatings;
   /** For parts with integrated gate protection: the card of each diode of a back-to-back pair. */
   gateProtectionDiode?: ModelCard;
@@ -170,12 +174,66 @@ const M2N7000: ModelCard = {
 /** Each channel of a BF998-class tetrode: VTO ≈ −0.8 V (typical gate pinch-off), KP = gfs²/(2·ID) with the
  * typical gfs 24 mS at 10 mA → 0.0288 A/V²; the same card gives IDSS ≈ 9 mA with VG1S = 0, the typical
  * figure of one datasheet revision. */
+const DUAL_GATE_DC = { LEVEL: 1, VTO: -0.8, KP: 0.0288, LAMBDA: 0.01, GAMMA: 0, PHI: 0.6 };
+const DUAL_GATE_DC_SOURCE =
+  "ESTIMATE, not a published model: each of the two channels of a BF998-class dual-gate depletion MOSFET as a level-1 card, VTO −0.8 V (typical pinch-off) and KP 0.0288 A/V² from gfs 24 mS at 10 mA [CALC from datasheet typicals, reference-data §4.4]; LAMBDA is a guess";
+
+/** A datasheet gate capacitance as a level-1 overlap capacitance per metre of channel width. Level 1
+ * without TOX has no Meyer (channel) part, so the channel's C_gs at any operating point is exactly
+ * CGSO·W: with the solver's default W the figure comes back unchanged. */
+function perMetreOfWidth(farads: number): number {
+  return farads / DEFAULT_CHANNEL_SIZE;
+}
+
+const W_UM = Number((DEFAULT_CHANNEL_SIZE * 1e6).toPrecision(6));
+
+/** `21` for 2.1 pF over 100 µm: the per-metre figure in nF/m, for the source texts. */
+function nanofaradsPerMetre(farads: number): string {
+  return String(Number((perMetreOfWidth(farads) * 1e9).toPrecision(4)));
+}
+
+/** BF998 typicals at VDS 8 V, VG2S 4 V (reference-data §4.4 [DOC]). */
+const BF998_CG1SS = 2.1e-12;
+const BF998_CG2SS = 1.2e-12;
+const BF998_CDG1 = 25e-15;
+
+/** Gate-1 channel: C_gs from Cg1ss, C_gd (to the internal node between the channels) from Cdg1. The
+ * datasheet's drain-to-gate-1 feedback is what gate 2's screening leaves; the two-channel model has no
+ * direct drain–gate-1 path, so Cdg1 is placed on gate 1's own channel, the nearest it has. */
 const DUAL_GATE_CHANNEL: ModelCard = {
   name: "BF998",
   type: "NMOS",
-  params: { LEVEL: 1, VTO: -0.8, KP: 0.0288, LAMBDA: 0.01, GAMMA: 0, PHI: 0.6 },
+  params: { ...DUAL_GATE_DC, CGSO: perMetreOfWidth(BF998_CG1SS), CGDO: perMetreOfWidth(BF998_CDG1) },
   source:
-    "ESTIMATE, not a published model: each of the two channels of a BF998-class dual-gate depletion MOSFET as a level-1 card, VTO −0.8 V (typical pinch-off) and KP 0.0288 A/V² from gfs 24 mS at 10 mA [CALC from datasheet typicals, reference-data §4.4]; LAMBDA is a guess, capacitances (Cg1ss 2.1 pF typ) are not modelled",
+    `${DUAL_GATE_DC_SOURCE}; gate-1 channel capacitances ESTIMATED from the datasheet typicals Cg1ss 2.1 pF and Cdg1 25 fF [DOC, reference-data §4.4] as level-1 overlaps per metre of the default channel width W = ${W_UM} µm [CALC]: CGSO = 2.1 pF / ${W_UM} µm = ${nanofaradsPerMetre(BF998_CG1SS)} nF/m, CGDO = 25 fF / ${W_UM} µm = ${nanofaradsPerMetre(BF998_CDG1)} nF/m (C_gd to the node between the channels)`,
+};
+
+/** Gate-2 channel: C_gs from Cg2ss; the datasheet gives no gate-2-to-drain figure, so CGDO stays 0. */
+const DUAL_GATE_CHANNEL_G2: ModelCard = {
+  name: "BF998_G2",
+  type: "NMOS",
+  params: { ...DUAL_GATE_DC, CGSO: perMetreOfWidth(BF998_CG2SS) },
+  source:
+    `${DUAL_GATE_DC_SOURCE}; gate-2 channel capacitance ESTIMATED from the datasheet typical Cg2ss 1.2 pF [DOC, reference-data §4.4] as a level-1 overlap per metre of the default channel width W = ${W_UM} µm [CALC]: CGSO = 1.2 pF / ${W_UM} µm = ${nanofaradsPerMetre(BF998_CG2SS)} nF/m; no gate-2–drain figure in our notes, CGDO 0`,
+};
+
+/** BF992 (VHF type) figures: Cig1-s 4 pF, Crs 30 fF (reference-data §4.4 [DOC]). */
+const BF992_CG1SS = 4e-12;
+const BF992_CRS = 30e-15;
+const BF992_DC_SOURCE = `${DUAL_GATE_DC_SOURCE}; used for the BF992 (|yfs| 25 mS at 15 mA, similar)`;
+
+const BF992_CHANNEL: ModelCard = {
+  name: "BF992",
+  type: "NMOS",
+  params: { ...DUAL_GATE_DC, CGSO: perMetreOfWidth(BF992_CG1SS), CGDO: perMetreOfWidth(BF992_CRS) },
+  source:
+    `${BF992_DC_SOURCE}; gate-1 channel capacitances ESTIMATED from the BF992's Cig1-s 4 pF and Crs 30 fF [DOC, reference-data §4.4] per metre of W = ${W_UM} µm [CALC]: CGSO = ${nanofaradsPerMetre(BF992_CG1SS)} nF/m, CGDO = ${nanofaradsPerMetre(BF992_CRS)} nF/m`,
+};
+
+const BF992_CHANNEL_G2: ModelCard = {
+  ...DUAL_GATE_CHANNEL_G2,
+  name: "BF992_G2",
+  source: `${BF992_DC_SOURCE}; gate-2 channel capacitance STAND-IN: the BF998's Cg2ss 1.2 pF (no BF992 gate-2 figure in our notes) as CGSO = ${nanofaradsPerMetre(BF998_CG2SS)} nF/m at W = ${W_UM} µm [CALC]`,
 };
 
 const DUAL_GATE_PROTECTION: ModelCard = {
@@ -358,6 +416,7 @@ const PARTS: LibraryPart[] = [
     aliases: ["BF998R", "BF998W", "BF998RW"],
     kind: "dual-gate-mosfet",
     model: DUAL_GATE_CHANNEL,
+    gate2Model: DUAL_GATE_CHANNEL_G2,
     gateProtectionDiode: DUAL_GATE_PROTECTION,
     ratings: {
       vds: 12, idMax: 30e-3, igMax: 10e-3, ptot: 0.2, idss: { min: 2e-3, max: 18e-3 }, vgsOff: { min: -2.5, typ: -0.8 },
@@ -369,7 +428,8 @@ const PARTS: LibraryPart[] = [
     name: "BF992",
     aliases: [],
     kind: "dual-gate-mosfet",
-    model: { ...DUAL_GATE_CHANNEL, name: "BF992", source: `${DUAL_GATE_CHANNEL.source}; used for the BF992 (|yfs| 25 mS at 15 mA, similar)` },
+    model: BF992_CHANNEL,
+    gate2Model: BF992_CHANNEL_G2,
     gateProtectionDiode: DUAL_GATE_PROTECTION,
     ratings: {
       vds: 20, idMax: 40e-3, ptot: 0.2, gateProtection: true,
@@ -414,25 +474,66 @@ export function zenerVoltageFromName(name: string): number | undefined {
   return undefined;
 }
 
-/** A generic zener at `volts`: breakdown BV at IBV = 5 mA (the usual test current of the small glass
- * zeners [MEM]); forward and dynamic parameters generic. */
+/** Test current of the generic card: 5 mA, the IZT of the small glass zeners (BZX55/BZX79 class) [MEM]. */
+export const GENERIC_ZENER_TEST_CURRENT = 5e-3;
+/** Series resistance of the generic card [CP: a default, not a datasheet figure]. */
+const GENERIC_ZENER_RS = 5;
+
+/** The generic card at `volts` (VZ at the test current IZT = IBV, terminal voltage). SPICE's IBV is the
+ * junction current at −BV; RS adds IBV·RS at the terminals, so BV = VZ − IBV·RS puts VZ where it is
+ * stated. `basis` says where the voltage was read ("the part name 'BZX55C5V6'"). */
+function genericZenerCard(volts: number, basis: string): ModelCard {
+  const bv = volts - GENERIC_ZENER_TEST_CURRENT * GENERIC_ZENER_RS;
+  return {
+    name: `ZENER_${volts}V`,
+    type: "D",
+    params: { IS: 1e-14, N: 1, RS: GENERIC_ZENER_RS, BV: bv, IBV: GENERIC_ZENER_TEST_CURRENT, CJO: 50e-12 },
+    source:
+      `ESTIMATE: generic zener card by voltage, VZ ${volts} V read from ${basis}, reached at IZT = IBV 5 mA [MEM: the small glass zeners' test current] ` +
+      `with BV = VZ − IBV·RS = ${volts} V − 5 mA × 5 Ω = ${Number(bv.toPrecision(6))} V; knee and slope a common-practice default [CP], not the part's: ` +
+      "breakdown current falls e-fold per N·VT = 25.9 mV below IZT (5 mA → 0.5 mA in 60 mV, sharper than a real zener below about 6 V), " +
+      "dynamic resistance RS + N·VT/IZT = 5 Ω + 5.2 Ω ≈ 10 Ω at IZT (datasheets give 5–100 Ω); IS 10 fA, N 1, CJO 50 pF generic",
+  };
+}
+
+/** A generic zener at `volts` read from a part name (BZX…, 1N47xx), with its series' dissipation. */
 export function zenerPart(volts: number, name: string): LibraryPart {
   const oneWatt = /^1N47/i.test(name.trim());
   return {
     name,
     aliases: [],
     kind: "zener",
-    model: {
-      name: `ZENER_${volts}V`,
-      type: "D",
-      params: { IS: 1e-14, N: 1, RS: 5, BV: volts, IBV: 5e-3, CJO: 50e-12 },
-      source: `ESTIMATE: generic zener card, BV ${volts} V read from the part name '${name}' at IBV 5 mA [MEM for the test current]; IS, N, RS, CJO generic`,
-    },
+    model: genericZenerCard(volts, `the part name '${name}'`),
     ratings: {
       vz: volts,
       ptot: oneWatt ? 1 : 0.5,
       source: oneWatt ? "1N47xx series: 1 W [MEM]" : "small glass zener (BZX55/BZX79 class): 500 mW [MEM]",
     },
+  };
+}
+
+/** Zener voltage a Value states: `15V`, `6.2V`, `6,2 V`, `5V6`, `ZENER 6.2V`, `15V 500mW`, or a part name
+ * that encodes it (`BZX55C15`). */
+export function zenerVoltageFromValue(value: string): number | undefined {
+  const t = value.trim().toUpperCase();
+  const rkm = /(?:^|[\s_-])(\d{1,3})V(\d{1,2})(?=$|[\s_/,])/.exec(t);
+  if (rkm) return Number(`${rkm[1]}.${rkm[2]}`);
+  const plain = /(?:^|[\s_-])(\d{1,3}(?:[.,]\d{1,2})?)\s?V(?=$|[\s_/,])/.exec(t);
+  if (plain) return Number((plain[1] ?? "").replace(",", "."));
+  return zenerVoltageFromName(t);
+}
+
+/** A zener part whose Value states its voltage: the generic card at it. No dissipation rating: the
+ * type (and so its package) is unknown. */
+export function zenerFromValue(value: string): LibraryPart | undefined {
+  const volts = zenerVoltageFromValue(value);
+  if (volts === undefined || !(volts > 0) || !Number.isFinite(volts)) return undefined;
+  return {
+    name: value.trim(),
+    aliases: [],
+    kind: "zener",
+    model: genericZenerCard(volts, `the Value '${value.trim()}'`),
+    ratings: { vz: volts, source: `zener voltage from the Value '${value.trim()}'; dissipation unknown (no part number)` },
   };
 }
 
