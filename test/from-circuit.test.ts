@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { buildSolverCircuit } from "../src/solve/from-circuit.js";
 import { solveOperatingPoint } from "../src/solve/index.js";
+import type { OperatingPoint } from "../src/solve/index.js";
+import { findModelCard, parseModelCards } from "../src/solve/spice-card.js";
+import { opValue, readDeck, referenceRuns } from "./support/ngspice.js";
 import { parseValue } from "../src/circuit/value.js";
 import type { Circuit, Net, Part, PartKind, PinRoles } from "../src/circuit/types.js";
 import type { Element } from "../src/solve/netlist.js";
@@ -247,5 +250,204 @@ describe("what is left out, and what cannot be modelled", () => {
     expect(byName(built.solver.elements, "L1")).toMatchObject({ henries: 10e-6, series: 0.35 });
     expect(byName(built.solver.elements, "L2")).toMatchObject({ series: 0.1 });
     expect(built.notes.map((n) => n.message)).toContain("connectors are left open (what plugs into them is not simulated): J1");
+  });
+});
+
+// --- subcircuits --------------------------------------------------------------------------------------
+
+/** The library part of the deck: from its "* library" line to "* end of library". */
+function deckLibrary(name: string): string {
+  const lines = readDeck(name).split(/\r?\n/);
+  const from = lines.findIndex((l) => l.trim().toLowerCase() === "* library");
+  const to = lines.findIndex((l) => l.trim().toLowerCase() === "* end of library");
+  if (from < 0 || to < from) throw new Error(`${name}.cir has no "* library" … "* end of library" part`);
+  return lines.slice(from + 1, to).join("\n");
+}
+
+/** test/reference/ngspice/subckt_dualgate_follower.cir drawn as a schematic: each top-level deck line is
+ * a part; the X lines are parts whose Sim.Library is the deck's library part. Q1's symbol pins are in
+ * SOT-143 order (1=S 2=D 3=G2 4=G1) while the block's pins are written D G1 G2 S, so only Sim.Pins
+ * connects it right; Q2 and J1 have no Sim.Pins and connect by position. */
+function subcktBoard(): Circuit {
+  const lib = { path: "follower.lib", text: deckLibrary("subckt_dualgate_follower") };
+  return circuit(
+    [
+      R("RD", "2.2k", "vdd", "d"), R("RS", "270", "src", "GND"), R("RG1", "1Meg", "g1", "GND"),
+      R("R1", "100k", "vdd", "g2"), R("R2", "47k", "g2", "GND"), R("RJS", "330", "js", "GND"),
+      part("Q1", {
+        kind: "dual-gate-mosfet", value: "DG-DEMO", nets: { S: "src", D: "d", G2: "g2", G1: "g1" },
+        fields: { "Sim.Library": "follower.lib", "Sim.Name": "DGSUB", "Sim.Pins": "1=S 2=D 3=G2 4=G1" },
+      }),
+      part("Q2", { kind: "npn", value: "NPN-PKG", nets: { C: "vdd", B: "d", E: "e" }, fields: { "Sim.Library": "follower.lib", "Sim.Name": "npnpkg" } }),
+      part("J1", { kind: "njfet", value: "J-PKG", nets: { D: "e", G: "GND", S: "js" }, fields: { "Sim.Library": "follower.lib", "Sim.Name": "JPKG" } }),
+    ],
+    ["vdd"],
+    { modelLibraries: [lib] },
+  );
+}
+
+/** ngspice's name for one of our values: nodes inside instance XQ1 are `xq1.mid`, ours `Q1:MID`. */
+const SUBCKT_VECTORS: Array<[string, (op: OperatingPoint) => number | undefined]> = [
+  ...["d", "src", "g2", "e", "js"].map((n): [string, (op: OperatingPoint) => number | undefined] => [`v(${n})`, (op) => op.nodeVoltages[n]]),
+  ...[["xq1.mid", "Q1:MID"], ["xq2.bi", "Q2:BI"], ["xq2.ci", "Q2:CI"], ["xq2.cj", "Q2:CJ"], ["xq2.ei", "Q2:EI"], ["xj1.di", "J1:DI"], ["xj1.si", "J1:SI"]]
+    .map(([theirs, mine]): [string, (op: OperatingPoint) => number | undefined] => [`v(${theirs})`, (op) => op.nodeVoltages[mine ?? ""]]),
+  ["i(vdd)", (op) => op.branchCurrents["Vrail_vdd"]],
+  ["i(l.xq2.le)", (op) => op.branchCurrents["Q2:LE"]],
+  ["i(v.xq2.vsense)", (op) => op.branchCurrents["Q2:VSENSE"]],
+  ["i(@m.xq1.m1[id])", (op) => { const d = op.devices["Q1.g1"]; return d?.kind === "mosfet" ? d.id : undefined; }],
+  ["i(@m.xq1.m2[id])", (op) => { const d = op.devices["Q1.g2"]; return d?.kind === "mosfet" ? d.id : undefined; }],
+  ["i(@q.xq2.xdie.q1[ic])", (op) => { const d = op.devices["Q2"]; return d?.kind === "bjt" ? d.ic : undefined; }],
+  ["i(@q.xq2.xdie.q1[ib])", (op) => { const d = op.devices["Q2"]; return d?.kind === "bjt" ? d.ib : undefined; }],
+  ["i(@j.xj1.j1[id])", (op) => { const d = op.devices["J1"]; return d?.kind === "jfet" ? d.id : undefined; }],
+];
+
+describe("parts modelled by subcircuits (test/reference/ngspice/subckt_dualgate_follower.cir)", () => {
+  const built = buildSolverCircuit(subcktBoard(), { railVolts: { vdd: 12 } });
+  const els = built.solver.elements;
+  const op = solveOperatingPoint(built.solver);
+
+  it("expands every instance, nested ones too, with prefixed internal nodes and names", () => {
+    expect(built.unmodelled).toEqual([]);
+    const names = els.map((e) => e.name);
+    expect(names).toEqual(expect.arrayContaining(["Q1.g1", "Q1.g2", "Q1:RLEAK", "Q2:RBB", "Q2:VSENSE", "Q2:LE", "Q2:CBE", "Q2", "Q2:XDIE:D1", "J1:RDD", "J1"]));
+    expect(byName(els, "Q1.g1")).toMatchObject({ kind: "M", d: "Q1:MID", g: "g1", s: "src", b: "src" });
+    const m2 = byName(els, "Q1.g2");
+    expect(m2).toMatchObject({ kind: "M", d: "d", g: "g2", s: "Q1:MID" });
+    expect(m2?.kind === "M" ? m2.w : undefined).toBeCloseTo(200e-6, 12);
+    expect(byName(els, "Q2")).toMatchObject({ kind: "Q", c: "Q2:CJ", b: "Q2:BI", e: "Q2:EI" });
+    expect(byName(els, "Q2:XDIE:D1")).toMatchObject({ kind: "D", anode: "Q2:EI", cathode: "Q2:BI" });
+    const note = built.notes.find((n) => n.ref === "Q1")?.message ?? "";
+    expect(note).toMatch(/modelled by subcircuit DGSUB from 'follower.lib'.*Q1:M1 is the gate-1 channel \(Q1.g1\), Q1:M2 the gate-2 channel \(Q1.g2\)/);
+  });
+
+  // 0.1 mV and 0.1 % (ngspice's default RELTOL): tighter than the solver's deck tests, as this deck
+  // has no hard-to-converge device; a flattening mistake moves these by volts.
+  it("solves to ngspice's operating point of the same deck (±0.1 mV on nodes, ±0.1 % on currents)", () => {
+    expect(op.converged).toBe(true);
+    for (const run of referenceRuns("subckt_dualgate_follower")) {
+      for (const [vector, mine] of SUBCKT_VECTORS) {
+        const ref = opValue(run.data, vector);
+        const value = mine(op);
+        expect(value, `${run.label}: no value of ours for ${vector}`).toBeDefined();
+        const err = Math.abs((value ?? Number.NaN) - ref);
+        const limit = vector.startsWith("v(") ? 1e-4 : 1e-3 * Math.abs(ref);
+        expect(err, `${run.label}: ${vector} ours ${value} vs ngspice ${ref}`).toBeLessThanOrEqual(limit);
+      }
+    }
+  });
+
+  it("without Sim.Pins the dual-gate block connects by position: symbol pin 1 (S) lands on the block's first pin, D", () => {
+    const board = subcktBoard();
+    const q1 = board.parts.find((p) => p.ref === "Q1");
+    if (q1) q1.fields = { "Sim.Library": "follower.lib", "Sim.Name": "DGSUB" };
+    const positional = buildSolverCircuit(board, { railVolts: { vdd: 12 } });
+    // Symbol pin 1 (S, on src) lands on the block's first pin D.
+    expect(positional.solver.elements.find((e) => e.name.startsWith("Q1") && e.kind === "M" && e.d === "src")).toBeDefined();
+  });
+
+  it("KiCad 6 fields: Spice_Lib_File + Spice_Model name the block, Spice_Node_Sequence lists symbol pins in its pin order", () => {
+    const lib = { path: "follower.lib", text: deckLibrary("subckt_dualgate_follower") };
+    // Symbol pins 1=E 2=B 3=C, so the sequence "3 2 1" is C B E, the block's order.
+    const q = part("Q6", { kind: "npn", value: "X", nets: { E: "e", B: "b", C: "c" }, fields: { Spice_Lib_File: "follower.lib", Spice_Model: "NPNPKG", Spice_Node_Sequence: "3 2 1" } });
+    const els6 = buildSolverCircuit(circuit([q], [], { modelLibraries: [lib] }), { railVolts: {} }).solver.elements;
+    expect(byName(els6, "Q6:RBB")).toMatchObject({ a: "b", b: "Q6:BI" });
+    expect(byName(els6, "Q6:RCC")).toMatchObject({ a: "c", b: "Q6:CI" });
+    expect(byName(els6, "Q6:LE")).toMatchObject({ a: "e", b: "Q6:EI" });
+  });
+
+  it("a block the solver cannot represent leaves the part out, naming the library line", () => {
+    const lib = { path: "amp.lib", text: "* invented\n.subckt GAIN IN OUT\nRIN IN 0 10k\nE1 OUT 0 IN 0 10\n.ends\n" };
+    const u = part("Q3", { kind: "npn", value: "GAIN", nets: { C: "c", B: "b", E: "e" }, fields: { "Sim.Library": "amp.lib", "Sim.Name": "GAIN", "Sim.Pins": "1=OUT 2=IN" } });
+    const b = buildSolverCircuit(circuit([u], [], { modelLibraries: [lib] }), { railVolts: {} });
+    expect(b.unmodelled).toEqual(["Q3"]);
+    expect(b.notes.find((n) => n.ref === "Q3" && /is not simulated/.test(n.message))?.message).toMatch(
+      /subcircuit GAIN from 'amp.lib' cannot be used: model library 'amp.lib', line 4: element E1 \(voltage-controlled voltage source\) is not supported/,
+    );
+  });
+
+  it("a Sim.Pins naming a pin the block lacks, or a pin count that does not match, is a reason, not a guess", () => {
+    const lib = { path: "follower.lib", text: deckLibrary("subckt_dualgate_follower") };
+    const wrongName = part("Q4", { kind: "npn", value: "X", nets: { C: "c", B: "b", E: "e" }, fields: { "Sim.Library": "follower.lib", "Sim.Name": "NPNPKG", "Sim.Pins": "1=C 2=B 3=EMITTER" } });
+    const fourPins = part("Q5", { kind: "dual-gate-mosfet", value: "X", nets: { S: "s", D: "d", G2: "g2", G1: "g1" }, fields: { "Sim.Library": "follower.lib", "Sim.Name": "NPNPKG" } });
+    const b = buildSolverCircuit(circuit([wrongName, fourPins], [], { modelLibraries: [lib] }), { railVolts: {} });
+    expect(b.unmodelled).toEqual(["Q4", "Q5"]);
+    const why = (ref: string): string => b.notes.find((n) => n.ref === ref && /is not simulated/.test(n.message))?.message ?? "";
+    expect(why("Q4")).toMatch(/maps pin 3 to EMITTER, which is not a pin of subcircuit NPNPKG \(C B E\)/);
+    expect(why("Q5")).toMatch(/the symbol has 4 pins and subcircuit NPNPKG has 3/);
+  });
+});
+
+// --- zeners by voltage and the built-in tetrode's capacitances ------------------------------------------
+
+describe("a zener whose Value is its voltage gets the generic card (test/reference/ngspice/zener_generic_by_voltage.cir)", () => {
+  const zenerAt5mA = (value: string): { built: ReturnType<typeof buildSolverCircuit>; volts: number | undefined } => {
+    const c = circuit([
+      part("D3", { kind: "zener", value, nets: { A: "GND", K: "k" }, libId: "Device:D_Zener" }),
+      part("I1", { kind: "current-source", value: "DC 5m", nets: { "+": "GND", "-": "k" }, fields: { "Sim.Device": "I", "Sim.Params": "dc=5m" } }),
+    ]);
+    const built = buildSolverCircuit(c, { railVolts: {} });
+    const op = solveOperatingPoint(built.solver);
+    return { built, volts: op.converged ? op.nodeVoltages.k : undefined };
+  };
+
+  it.each([["15V", 15], ["5V6", 5.6], ["6.2V", 6.2], ["ZENER 6.2V", 6.2], ["BZX55C15", 15]])("%s: %d V across it at IBV 5 mA (±1 mV)", (value, volts) => {
+    const { built, volts: measured } = zenerAt5mA(value);
+    expect(built.unmodelled).toEqual([]);
+    const d = byName(built.solver.elements, "D3");
+    expect(d?.kind === "D" && d.model.source).toMatch(/generic zener card by voltage/);
+    expect(Math.abs((measured ?? Number.NaN) - volts)).toBeLessThanOrEqual(1e-3);
+  });
+
+  it("the card is the deck's, and ngspice puts the stated 15 V and 5.6 V across it at 5 mA too (±1 mV)", () => {
+    const text = readDeck("zener_generic_by_voltage");
+    for (const [value, node, volts] of [["15V", "k15", 15], ["5V6", "k56", 5.6]] as const) {
+      const d = byName(zenerAt5mA(value).built.solver.elements, "D3");
+      const card = d?.kind === "D" ? d.model : undefined;
+      const deckCard = findModelCard(parseModelCards(text, "deck").models, card?.name ?? "?");
+      expect(Object.keys(deckCard?.params ?? {}).sort()).toEqual(Object.keys(card?.params ?? {}).sort());
+      for (const [k, v] of Object.entries(card?.params ?? {})) {
+        expect(Math.abs((deckCard?.params[k] ?? Number.NaN) - v) / Math.abs(v), `${card?.name} ${k}`).toBeLessThan(1e-9);
+      }
+      for (const run of referenceRuns("zener_generic_by_voltage")) {
+        expect(Math.abs(opValue(run.data, `v(${node})`) - volts), run.label).toBeLessThanOrEqual(1e-3);
+      }
+    }
+  });
+
+  it("a zener with no voltage anywhere is still left out, with a hint to write it", () => {
+    const { built } = zenerAt5mA("D_Zener");
+    expect(built.unmodelled).toEqual(["D3"]);
+    expect(built.notes.find((n) => n.ref === "D3")?.message).toMatch(/write the zener voltage in its Value/);
+  });
+});
+
+describe("the built-in tetrode's gate capacitances (BF998 typicals, reference-data §4.4)", () => {
+  it("each channel's C_gs at the operating point is the datasheet's Cg1ss 2.1 pF / Cg2ss 1.2 pF (±1 %); gate 1's C_gd is Cdg1 25 fF", () => {
+    // An invented 12 V stage: gate 2 at 4 V from a divider, gate 1 at 0 V, 100 Ω source resistor, 1 kΩ drain load.
+    const c = circuit(
+      [
+        R("R1", "200k", "+12V", "g2"), R("R2", "100k", "g2", "GND"), R("R3", "100k", "g1", "GND"),
+        R("R4", "100", "s", "GND"), R("R5", "1k", "+12V", "d"),
+        part("Q1", { kind: "dual-gate-mosfet", value: "BF998", nets: { S: "s", D: "d", G2: "g2", G1: "g1" } }),
+      ],
+      ["+12V"],
+    );
+    const built = buildSolverCircuit(c, { railVolts: {} });
+    const op = solveOperatingPoint(built.solver);
+    expect(op.converged).toBe(true);
+    const g1 = op.devices["Q1.g1"];
+    const g2 = op.devices["Q1.g2"];
+    expect(g1?.kind === "mosfet" && g1.region).toBe("saturation");
+    expect(g2?.kind === "mosfet" && g2.region).toBe("saturation");
+    const cgs1 = g1?.kind === "mosfet" ? g1.cgs : Number.NaN;
+    const cgs2 = g2?.kind === "mosfet" ? g2.cgs : Number.NaN;
+    const cgd1 = g1?.kind === "mosfet" ? g1.cgd : Number.NaN;
+    expect(Math.abs(cgs1 - 2.1e-12) / 2.1e-12).toBeLessThanOrEqual(0.01);
+    expect(Math.abs(cgs2 - 1.2e-12) / 1.2e-12).toBeLessThanOrEqual(0.01);
+    expect(Math.abs(cgd1 - 25e-15) / 25e-15).toBeLessThanOrEqual(0.01);
+    // Within the datasheet's Cg1ss maximum of 2.5 pF even with gate 1's C_gd added.
+    expect(cgs1 + cgd1).toBeLessThanOrEqual(2.5e-12);
+    const card = byName(built.solver.elements, "Q1.g2");
+    expect(card?.kind === "M" && card.model.source).toMatch(/CGSO = 1\.2 pF \/ 100 µm = 12 nF\/m/);
   });
 });

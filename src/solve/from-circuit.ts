@@ -4,16 +4,24 @@
 //
 // Model resolution, first hit wins: Sim.* fields (Sim.Library + Sim.Name, or Sim.Device with inline
 // Sim.Params), KiCad 6 Spice_Model / Spice_Lib_File, the config's model text, the built-in library by
-// Value and then by the symbol's name.
+// Value and then by the symbol's name, and for a zener a generic card at the voltage its Value states.
+// A name may be a `.model` card or a `.subckt` block; a subcircuit is expanded in place (internal
+// nodes and elements prefixed by the part's reference, `Q1:MID`), its pins mapped by Sim.Pins (or
+// KiCad 6's Spice_Node_Sequence) or, without either, by position in pin-number order. The part's own device inside (the only transistor or
+// diode; a dual-gate's channels by which gate they sit on) takes the name the Context looks for:
+// `Q1`, or `Q1.g1` / `Q1.g2`.
 import type { Circuit, Net, Part, PartKind } from "../circuit/types.js";
 import type { Element, ModelCard, ModelType, SolverCircuit } from "./netlist.js";
 import { REQUIRED_ROLES } from "../circuit/classify.js";
-import { parseSimParams, parseSourceSpec, type SourceSpec } from "../circuit/source-spec.js";
+import { parseSimParams, parseSimPins, parseSourceSpec, type SourceSpec } from "../circuit/source-spec.js";
 import { parseSpiceNumber } from "../circuit/spice-number.js";
 import { formatQuantity, parseQuantity } from "../circuit/units.js";
 import { estimateCapacitorParasitics } from "./parasitics.js";
 import { findModelCard, parseModelCards, type ParsedModels } from "./spice-card.js";
-import { findModel, type LibraryPart, type PartRatings } from "./parts/library.js";
+import { findModel, zenerFromValue, type LibraryPart, type PartRatings } from "./parts/library.js";
+import { findSubcircuit, type SubcircuitDef } from "./subckt-syntax.js";
+import { expandSubcircuit } from "./subckt-expand.js";
+import { naturalCompare } from "../read/natural-order.js";
 
 export interface BuildNote {
   ref?: string;
@@ -122,10 +130,28 @@ const WANTED_TYPES: Partial<Record<PartKind, readonly ModelType[]>> = {
   "dual-gate-mosfet": ["NMOS"],
 };
 
-interface ModelChoice {
+interface CardChoice {
   card: ModelCard;
+  /** A dual-gate's gate-2 channel when it differs from `card` (the built-in tetrodes' capacitances). */
+  gate2Card?: ModelCard;
   libraryPart?: LibraryPart;
 }
+
+interface SubcircuitChoice {
+  subcircuit: SubcircuitDef;
+  /** The text the block was read from: its top-level cards and blocks are visible to it. */
+  library: ParsedModels;
+  /** "'dg-mosfet.lib'", "config models", for notes. */
+  where: string;
+  libraryPart?: LibraryPart;
+}
+
+type ModelChoice = CardChoice | SubcircuitChoice;
+
+/** Kinds whose model is one device: the element that is the part, inside a subcircuit. */
+const PRINCIPAL_ELEMENT: Partial<Record<PartKind, "D" | "Q" | "J" | "M">> = {
+  diode: "D", zener: "D", npn: "Q", pnp: "Q", njfet: "J", pjfet: "J", nmos: "M", pmos: "M",
+};
 
 interface BuildContext {
   circuit: Circuit;
@@ -149,18 +175,37 @@ function typeFits(card: ModelCard, want: readonly ModelType[], part: Part, ctx: 
   return false;
 }
 
-function withOverrides(card: ModelCard, part: Part, ctx: BuildContext): ModelCard {
+/** Model parameters a part's Sim.Params override (instance parameters dropped); unread ones noted once. */
+function overridesOf(part: Part, ctx: BuildContext): Record<string, number> {
   const text = field(part, "Sim.Params");
-  if (!text) return card;
+  if (!text) return {};
   const { params, unread } = numericParams(text);
   for (const k of Object.keys(params)) if (INSTANCE_PARAMS.has(k)) delete params[k];
   if (unread.length > 0) ctx.notes.push({ ref: part.ref, message: `${part.ref}: Sim.Params entries not read as numbers: ${unread.join(" ")}` });
+  return params;
+}
+
+function overridden(card: ModelCard, part: Part, params: Record<string, number>): ModelCard {
   if (Object.keys(params).length === 0) return card;
   return {
     ...card,
     params: { ...card.params, ...params },
     source: `${card.source}; overridden by Sim.Params of ${part.ref} (${Object.keys(params).join(", ")})`,
   };
+}
+
+function withOverrides(card: ModelCard, part: Part, ctx: BuildContext): ModelCard {
+  return overridden(card, part, overridesOf(part, ctx));
+}
+
+/** A `.model` card or, failing that, a `.subckt` block named `name` in `lib`; Sim.Device SUBCKT
+ * asks for the block first. */
+function cardOrSubcircuit(lib: ParsedModels, name: string, part: Part): { card?: ModelCard; subcircuit?: SubcircuitDef } {
+  const card = findModelCard(lib.models, name);
+  const subcircuit = findSubcircuit(lib.subcircuits, name);
+  const wantsSubckt = field(part, "Sim.Device")?.toUpperCase() === "SUBCKT";
+  if (subcircuit && (wantsSubckt || !card)) return { subcircuit };
+  return card ? { card } : {};
 }
 
 /** Names a part's model may go by, in the order they are tried. */
@@ -178,6 +223,7 @@ function resolveModel(part: Part, want: readonly ModelType[], ctx: BuildContext)
   const simType = (field(part, "Sim.Type") ?? "").toUpperCase();
   const names = modelNames(part);
   const libraryPart = names.map(findModel).find((p) => p !== undefined);
+  const lp = libraryPart ? { libraryPart } : {};
 
   // 1. Sim.* fields (KiCad 7+).
   if (simLibrary) {
@@ -186,11 +232,10 @@ function resolveModel(part: Part, want: readonly ModelType[], ctx: BuildContext)
     if (!lib) {
       ctx.notes.push({ ref: part.ref, message: `${part.ref}: model library '${simLibrary}' was not read; looking for ${name} elsewhere` });
     } else {
-      const card = findModelCard(lib.models, name);
-      if (!card) ctx.notes.push({ ref: part.ref, message: `${part.ref}: no .model ${name} in '${simLibrary}' (subcircuits are not supported); looking elsewhere` });
-      else if (typeFits(card, want, part, ctx, `'${simLibrary}'`)) {
-        return { card: withOverrides(card, part, ctx), ...(libraryPart ? { libraryPart } : {}) };
-      }
+      const { card, subcircuit } = cardOrSubcircuit(lib, name, part);
+      if (subcircuit) return { subcircuit, library: lib, where: `'${simLibrary}'`, ...lp };
+      if (!card) ctx.notes.push({ ref: part.ref, message: `${part.ref}: neither a .model nor a .subckt ${name} in '${simLibrary}'; looking elsewhere` });
+      else if (typeFits(card, want, part, ctx, `'${simLibrary}'`)) return { card: withOverrides(card, part, ctx), ...lp };
     }
   } else if (simDevice && SIM_DEVICE_TYPE[simDevice]) {
     const type = SIM_DEVICE_TYPE[simDevice];
@@ -205,7 +250,7 @@ function resolveModel(part: Part, want: readonly ModelType[], ctx: BuildContext)
         ctx.notes.push({ ref: part.ref, message: `${part.ref}: Sim.Params LEVEL=${params.LEVEL}: only level-1 MOSFETs are supported; looking for another model` });
       } else {
         const card: ModelCard = { name: `${part.ref}_model`, type, params, source: `Sim.Params of ${part.ref} (unlisted parameters at SPICE defaults)` };
-        if (typeFits(card, want, part, ctx, "Sim.Device")) return { card, ...(libraryPart ? { libraryPart } : {}) };
+        if (typeFits(card, want, part, ctx, "Sim.Device")) return { card, ...lp };
       }
     }
   }
@@ -215,24 +260,36 @@ function resolveModel(part: Part, want: readonly ModelType[], ctx: BuildContext)
   const spiceModel = field(part, "Spice_Model");
   if (spiceLib && spiceModel) {
     const lib = libraryModels(ctx, spiceLib);
-    const card = lib ? findModelCard(lib.models, spiceModel) : undefined;
+    const { card, subcircuit } = lib ? cardOrSubcircuit(lib, spiceModel, part) : {};
     if (!lib) ctx.notes.push({ ref: part.ref, message: `${part.ref}: model library '${spiceLib}' was not read; looking for ${spiceModel} elsewhere` });
-    else if (!card) ctx.notes.push({ ref: part.ref, message: `${part.ref}: no .model ${spiceModel} in '${spiceLib}'; looking elsewhere` });
-    else if (typeFits(card, want, part, ctx, `'${spiceLib}'`)) return { card: withOverrides(card, part, ctx), ...(libraryPart ? { libraryPart } : {}) };
+    else if (subcircuit) return { subcircuit, library: lib, where: `'${spiceLib}'`, ...lp };
+    else if (!card) ctx.notes.push({ ref: part.ref, message: `${part.ref}: neither a .model nor a .subckt ${spiceModel} in '${spiceLib}'; looking elsewhere` });
+    else if (typeFits(card, want, part, ctx, `'${spiceLib}'`)) return { card: withOverrides(card, part, ctx), ...lp };
   }
 
   // 3. The config's models, by the part's names.
   if (ctx.config) {
     for (const name of names) {
-      const card = findModelCard(ctx.config.models, name);
-      if (card && typeFits(card, want, part, ctx, "config models")) return { card: withOverrides(card, part, ctx), ...(libraryPart ? { libraryPart } : {}) };
+      const { card, subcircuit } = cardOrSubcircuit(ctx.config, name, part);
+      if (subcircuit) return { subcircuit, library: ctx.config, where: "config models", ...lp };
+      if (card && typeFits(card, want, part, ctx, "config models")) return { card: withOverrides(card, part, ctx), ...lp };
     }
   }
 
   // 4. The built-in library.
   for (const name of names) {
-    const lp = findModel(name);
-    if (lp && typeFits(lp.model, want, part, ctx, "built-in library")) return { card: withOverrides(lp.model, part, ctx), libraryPart: lp };
+    const found = findModel(name);
+    if (found && typeFits(found.model, want, part, ctx, "built-in library")) {
+      const params = overridesOf(part, ctx);
+      const gate2 = found.gate2Model ? { gate2Card: overridden(found.gate2Model, part, params) } : {};
+      return { card: overridden(found.model, part, params), ...gate2, libraryPart: found };
+    }
+  }
+
+  // 5. A zener whose Value states its voltage (`15V`, `5V6`, `ZENER 6.2V`): the generic card at it.
+  if (part.kind === "zener") {
+    const generic = zenerFromValue(part.value);
+    if (generic) return { card: withOverrides(generic.model, part, ctx), libraryPart: generic };
   }
   return undefined;
 }
@@ -427,12 +484,14 @@ class Builder {
     const want = WANTED_TYPES[part.kind] ?? [];
     const choice = resolveModel(part, want, this.ctx);
     const lp = choice?.libraryPart ?? modelNames(part).map(findModel).find((p) => p !== undefined);
-    const rating = lp?.ratings ?? (choice ? ratingsFromCard(choice.card) : undefined);
+    const rating = lp?.ratings ?? (choice && "card" in choice ? ratingsFromCard(choice.card) : undefined);
     if (rating) this.ratings[part.ref] = rating;
     if (!choice) {
       const tried = modelNames(part).join("', '");
-      return this.skip(part, `no model found for '${tried}' (Sim.* fields, model libraries, the config's models and the built-in library were searched); add a .model card under "models" in the config`);
+      const zenerHint = part.kind === "zener" ? " (or write the zener voltage in its Value, e.g. 5V6)" : "";
+      return this.skip(part, `no model found for '${tried}' (Sim.* fields, model libraries, the config's models and the built-in library were searched); add a .model card under "models" in the config${zenerHint}`);
     }
+    if ("subcircuit" in choice) return this.addSubcircuit(part, choice);
     const model = choice.card;
     if (part.kind === "zener" && model.params.BV === undefined) this.note(part, `zener model ${model.name} has no BV; it will not break down`);
     switch (part.kind) {
@@ -452,7 +511,7 @@ class Builder {
         return;
       }
       case "dual-gate-mosfet":
-        this.addDualGate(part, model, lp?.gateProtectionDiode);
+        this.addDualGate(part, model, choice.gate2Card ?? model, lp?.gateProtectionDiode);
         return;
       default:
         return;
@@ -461,20 +520,122 @@ class Builder {
 
   /** A tetrode as two channels in series through an internal node (G1 channel at the source, G2 channel
    * at the drain, substrate on the source), plus back-to-back gate–source diodes when protected. */
-  addDualGate(part: Part, model: ModelCard, protection: ModelCard | undefined): void {
+  addDualGate(part: Part, model: ModelCard, gate2Model: ModelCard, protection: ModelCard | undefined): void {
     const d = this.node(part, "D");
     const s = this.node(part, "S");
     const g1 = this.node(part, "G1");
     const g2 = this.node(part, "G2");
     const mid = `${part.ref}#mid`;
     this.elements.push({ kind: "M", name: `${part.ref}.g1`, d: mid, g: g1, s, b: s, model });
-    this.elements.push({ kind: "M", name: `${part.ref}.g2`, d, g: g2, s: mid, b: s, model });
+    this.elements.push({ kind: "M", name: `${part.ref}.g2`, d, g: g2, s: mid, b: s, model: gate2Model });
     if (!protection) return;
     for (const [label, gate] of [["g1", g1], ["g2", g2]] as const) {
       const k = `${part.ref}#${label}prot`;
       this.elements.push({ kind: "D", name: `${part.ref}.${label}a`, anode: gate, cathode: k, model: protection });
       this.elements.push({ kind: "D", name: `${part.ref}.${label}b`, anode: s, cathode: k, model: protection });
     }
+  }
+
+  /** Subcircuit pin → node: by Sim.Pins (`1=S 2=D 3=G2 4=G1`, symbol pin = subcircuit pin), by KiCad 6's
+   * Spice_Node_Sequence (symbol pins in the subcircuit's pin order), else by position in pin-number
+   * order. A string is the reason it cannot be done. */
+  subcircuitPins(part: Part, def: SubcircuitDef): Map<string, string> | string {
+    const symbolPins = [...new Set([...Object.keys(part.pins), ...Object.keys(part.pinNames)])].sort(naturalCompare);
+    const nodeOfPin = (pin: string): string => {
+      const net = part.pins[pin];
+      if (net === undefined) {
+        this.note(part, `pin ${pin} is not connected`);
+        return `${part.ref}#pin${pin}`;
+      }
+      return this.nodeOfNet[net] ?? net;
+    };
+    const pinNodes = new Map<string, string>();
+    const simPins = field(part, "Sim.Pins");
+    if (simPins) {
+      const pairs = parseSimPins(simPins);
+      for (const [pin, subPin] of Object.entries(pairs)) {
+        const want = subPin.toUpperCase();
+        if (!symbolPins.includes(pin)) return `Sim.Pins '${simPins}' names pin ${pin}, which the symbol does not have (pins ${symbolPins.join(", ")})`;
+        if (!def.pins.includes(want)) return `Sim.Pins '${simPins}' maps pin ${pin} to ${subPin}, which is not a pin of subcircuit ${def.name} (${def.pins.join(" ")})`;
+        if (pinNodes.has(want)) return `Sim.Pins '${simPins}' maps two symbol pins to subcircuit pin ${subPin}`;
+        pinNodes.set(want, nodeOfPin(pin));
+      }
+      const open = symbolPins.filter((p) => !(p in pairs));
+      if (open.length > 0) this.note(part, `symbol pin${open.length > 1 ? "s" : ""} ${open.join(", ")} not in Sim.Pins: left out of the subcircuit`);
+      return pinNodes;
+    }
+    const sequence = field(part, "Spice_Node_Sequence")?.split(/[\s,]+/).filter((p) => p !== "");
+    const order = sequence ?? symbolPins;
+    const how = sequence ? `Spice_Node_Sequence '${sequence.join(" ")}' lists` : "the symbol has";
+    if (order.length !== def.pins.length) {
+      return `${how} ${order.length} pins and subcircuit ${def.name} has ${def.pins.length} (${def.pins.join(" ")}); give a Sim.Pins field (e.g. "${def.pins.map((p, i) => `${symbolPins[i] ?? i + 1}=${p}`).join(" ")}")`;
+    }
+    const unknown = order.find((p) => !symbolPins.includes(p));
+    if (unknown !== undefined) return `${how} pin ${unknown}, which the symbol does not have (pins ${symbolPins.join(", ")})`;
+    def.pins.forEach((p, i) => pinNodes.set(p, nodeOfPin(order[i] ?? "")));
+    return pinNodes;
+  }
+
+  /** A part modelled by a subcircuit: its expansion, with the part's own device(s) named as the Context
+   * expects. */
+  addSubcircuit(part: Part, choice: SubcircuitChoice): void {
+    const def = choice.subcircuit;
+    const pins = this.subcircuitPins(part, def);
+    if (typeof pins === "string") return this.skip(part, `subcircuit ${def.name} from ${choice.where}: ${pins}`);
+    const expansion = expandSubcircuit(def, pins, part.ref, choice.library);
+    if (!expansion.ok) return this.skip(part, `subcircuit ${def.name} from ${choice.where} cannot be used: ${expansion.problem}`);
+    const elements = expansion.elements;
+    for (const n of expansion.notes) this.note(part, n);
+    const params = field(part, "Sim.Params");
+    if (params) this.note(part, `Sim.Params '${params}' not passed to subcircuit ${def.name}: subcircuit parameters are not supported`);
+    const named = part.kind === "dual-gate-mosfet" ? this.nameChannels(part, elements) : this.namePrincipal(part, elements);
+    if (named === undefined) return;
+    this.note(part, `modelled by subcircuit ${def.name} from ${choice.where} (line ${def.line}), ${elements.length} elements${named}`);
+    this.elements.push(...elements);
+  }
+
+  /** The one D/Q/J/M inside that is the part gets the part's reference. Returns text for the note, or
+   * undefined when the part was skipped (its device has the wrong polarity). */
+  namePrincipal(part: Part, elements: Element[]): string | undefined {
+    const kind = PRINCIPAL_ELEMENT[part.kind];
+    if (kind === undefined) return "";
+    const found = elements.filter((e) => e.kind === kind);
+    const [only] = found;
+    if (found.length !== 1 || only === undefined) {
+      return `; ${found.length === 0 ? "no" : `${found.length}`} ${kind} elements inside, so ${part.ref}'s own operating point is not reported`;
+    }
+    const want = WANTED_TYPES[part.kind] ?? [];
+    if ((only.kind === "D" || only.kind === "Q" || only.kind === "J" || only.kind === "M") && !want.includes(only.model.type)) {
+      this.skip(part, `the ${kind} element ${only.name} in its subcircuit uses model ${only.model.name} of type ${only.model.type}, but the symbol is a ${part.kind}`);
+      return undefined;
+    }
+    const inside = only.name;
+    only.name = part.ref;
+    return `; ${inside} is ${part.ref}'s own device`;
+  }
+
+  /** A dual-gate's channels: the MOSFET whose gate is on the G1 pin's node is `REF.g1`, on G2 `REF.g2`;
+   * failing that (gates behind resistors), of exactly two MOSFETs in series the one at the source. */
+  nameChannels(part: Part, elements: Element[]): string {
+    const mosfets = elements.filter((e): e is Extract<Element, { kind: "M" }> => e.kind === "M");
+    const g1Node = this.node(part, "G1");
+    const g2Node = this.node(part, "G2");
+    let g1 = mosfets.filter((m) => m.g === g1Node);
+    let g2 = mosfets.filter((m) => m.g === g2Node);
+    if (!(g1.length === 1 && g2.length === 1) && mosfets.length === 2) {
+      const [a, b] = mosfets as [Extract<Element, { kind: "M" }>, Extract<Element, { kind: "M" }>];
+      if (a.d === b.s) [g1, g2] = [[a], [b]];
+      else if (b.d === a.s) [g1, g2] = [[b], [a]];
+    }
+    const [lower] = g1;
+    const [upper] = g2;
+    if (g1.length !== 1 || g2.length !== 1 || lower === undefined || upper === undefined || lower === upper) {
+      return `; its gate-1 and gate-2 channels could not be told apart (${mosfets.length} MOSFETs inside), so their operating points are not reported`;
+    }
+    const names = `; ${lower.name} is the gate-1 channel (${part.ref}.g1), ${upper.name} the gate-2 channel (${part.ref}.g2)`;
+    lower.name = `${part.ref}.g1`;
+    upper.name = `${part.ref}.g2`;
+    return names;
   }
 
   /** Ideal sources for rails whose voltage is known and which no simulated source part drives. */
