@@ -169,6 +169,7 @@ function checkOne(ctx: Context, c: Checked, k: number): Finding[] {
     net: c.net,
     curve: points.map((p) => [p.hertz, p.magnitude]),
     limitOhms: Math.min(...judged.map((p) => tol.limit(p.hertz))),
+    limitCurve: judged.map((p) => [p.hertz, tol.limit(p.hertz)]),
   });
   const failing = judged.filter((p) => p.magnitude > tol.limit(p.hertz));
   if (failing.length === 0) return [];

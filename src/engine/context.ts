@@ -590,13 +590,26 @@ export function logGrid(from: number, to: number, perDecade: number, include: re
   return points.filter((f, i) => i === 0 || f / (points[i - 1] ?? f) > 1 + 1e-9);
 }
 
+/** The figures a bench builder reads off a Q-point table, per device kind (the solver reports more:
+ * internal junction voltages, every conductance, which would only crowd the table). */
+const TABLE_FIGURES: Record<DeviceOperatingPoint["kind"], readonly string[]> = {
+  bjt: ["vbe", "vce", "ic", "ib", "power", "gm", "cpi", "cmu"],
+  jfet: ["vgs", "vds", "id", "power", "gm", "gds", "cgs", "cgd"],
+  mosfet: ["vgs", "vds", "id", "vth", "power", "gm", "gds", "cgs", "cgd"],
+  diode: ["vd", "id", "power"],
+};
+
 function deviceTable(point: OperatingPoint | undefined): DeviceReport[] {
   if (!point) return [];
   return Object.entries(point.devices)
     .sort(([a], [b]) => naturalCompare(a, b))
     .map(([ref, d]) => {
       const figures: Record<string, number> = {};
-      for (const [k, v] of Object.entries(d)) if (typeof v === "number" && Number.isFinite(v)) figures[k] = v;
+      const all = d as unknown as Record<string, unknown>;
+      for (const k of TABLE_FIGURES[d.kind]) {
+        const v = all[k];
+        if (typeof v === "number" && Number.isFinite(v)) figures[k] = v;
+      }
       return { ref, type: d.kind === "diode" ? "diode" : d.type, region: d.region, figures };
     });
 }

@@ -30,7 +30,11 @@ export interface BaseReport {
   net: string;
   /** [hertz, ohms] of |Z| from the base (gate) node to ground. */
   curve: [number, number][];
+  /** The lowest in-band limit (the strictest point). */
   limitOhms: number;
+  /** [hertz, ohms] of the limit across the band: it falls with frequency where the device's input
+   * capacitance (Cπ, Cgs) takes over, so one number cannot show where grounding fails. */
+  limitCurve?: [number, number][];
 }
 
 export interface DeviceReport {

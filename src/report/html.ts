@@ -58,6 +58,7 @@ svg.plot .plot-frame { fill: none; stroke: var(--muted); stroke-width: 1; }
 svg.plot .plot-curve { fill: none; stroke: var(--curve); stroke-width: 2; }
 svg.plot .plot-level { stroke: var(--level); stroke-width: 1.4; stroke-dasharray: 6 4; }
 svg.plot .plot-level-label { fill: var(--level); }
+svg.plot .plot-curve.plot-limit { stroke: var(--level); stroke-width: 1.4; stroke-dasharray: 6 4; }
 @media print {
   body { max-width: none; padding: 0; font-size: 11pt; color: #000; background: #fff; }
   nav { display: none; }
@@ -160,12 +161,16 @@ function designSection(d: DesignReport, index: number, band: LintResult["band"],
       const svg = logLogPlotSvg({
         title: `${b.ref} base (${b.net}): |Z| to ground`,
         xUnit: "Hz", yUnit: "Ω",
-        curves: [{ points: b.curve, label: `|Z| of ${b.net}` }],
-        levels: [{ y: b.limitOhms, label: `limit ${si(b.limitOhms, "Ω")}` }],
+        curves: [
+          { points: b.curve, label: `|Z| of ${b.net}` },
+          // The limit varies across the band; draw it as a dashed curve where it is known.
+          ...(b.limitCurve && b.limitCurve.length > 1 ? [{ points: b.limitCurve, label: "limit across the band", className: "plot-limit" }] : []),
+        ],
+        levels: b.limitCurve && b.limitCurve.length > 1 ? [] : [{ y: b.limitOhms, label: `limit ${si(b.limitOhms, "Ω")}` }],
         band,
       });
       const link = partAnchor.has(b.ref) ? ` · <a href="#${partAnchor.get(b.ref) ?? ""}">findings</a>` : "";
-      out.push(`<figure class="base">${svg}<figcaption><strong>${h(b.ref)}</strong> on ${h(b.net)} — limit ${h(si(b.limitOhms, "Ω"))}${link}.</figcaption></figure>`);
+      out.push(`<figure class="base">${svg}<figcaption><strong>${h(b.ref)}</strong> on ${h(b.net)} — limit (dashed) down to ${h(si(b.limitOhms, "Ω"))} in band${link}.</figcaption></figure>`);
     }
   }
 

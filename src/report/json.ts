@@ -49,7 +49,7 @@ function design(d: DesignReport): Record<string, unknown> {
       })),
     bases: [...d.bases]
       .sort((a, b) => compareText(a.ref, b.ref))
-      .map((b) => ({ ref: b.ref, net: b.net, curve: b.curve, limitOhms: b.limitOhms })),
+      .map((b) => ({ ref: b.ref, net: b.net, curve: b.curve, limitOhms: b.limitOhms, ...(b.limitCurve ? { limitCurve: b.limitCurve } : {}) })),
     devices: [...d.devices]
       .sort((a, b) => compareText(a.ref, b.ref))
       .map((v) => ({ ref: v.ref, type: v.type, region: v.region, figures: v.figures })),
