@@ -3,12 +3,15 @@
 // The figures are checked twice: against the finding's `data`, and against an independent
 // recomputation here (closed-form formulas, IEC 60063 Table 1, recorded ngspice decks — and a
 // live ngspice run when it is installed), so a value in the JSON cannot drift from its source.
-import { existsSync, readFileSync } from "node:fs";
-import { join, resolve } from "node:path";
+// The rules' own test boards are held to one board-wide fact too: no electrolytic is reversed
+// except on the board that is reversed on purpose.
+import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
+import { join, relative, resolve } from "node:path";
 import { describe, expect, it } from "vitest";
 import { lint } from "../src/engine/lint.js";
 import type { Finding, Severity } from "../src/engine/types.js";
 import { allRules } from "../rules/index.js";
+import { ratings } from "../rules/ratings.js";
 import type { Recording } from "./support/ngspice.js";
 import { acVector, loadRecording, ngspiceVersion, opValue, runNgspice } from "./support/ngspice.js";
 
@@ -266,5 +269,28 @@ describe("fixture boards: expected-findings.json", () => {
         expect(expected.mustNot.some((n) => n.rule === rule.id && n.parts === undefined && (n.severity === undefined || n.severity.includes(severity))), `clean mustNot covers ${rule.id} ${severity}`).toBe(true);
       }
     }
+  });
+});
+
+/** Every netlist under a folder, depth-first, sorted. */
+function netlistsUnder(dir: string): string[] {
+  return readdirSync(dir).sort().flatMap((name) => {
+    const path = join(dir, name);
+    if (statSync(path).isDirectory()) return netlistsUnder(path);
+    return name.endsWith(".net") ? [path] : [];
+  });
+}
+
+describe("rule test boards (fixtures/rules)", () => {
+  it("electrolytics have + toward the higher DC potential, except on the board that is reversed on purpose", () => {
+    const reversed: string[] = [];
+    for (const file of netlistsUnder(join(FIXTURES, "rules"))) {
+      for (const design of lint({ paths: [file], rules: [ratings] }).designs) {
+        for (const f of design.findings) {
+          if (typeof f.data.reverseVolts === "number") reversed.push(`${relative(FIXTURES, file)} ${f.parts.join(",")}`);
+        }
+      }
+    }
+    expect(reversed).toEqual(["rules/ratings/electrolytic-reversed.net C2"]);
   });
 });
