@@ -4,7 +4,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Ajv } from "ajv";
 import { formatJson, REPORT_SCHEMA_VERSION } from "../src/report/json.js";
-import { HOSTILE, LONG_VALUE, demoResult } from "./helpers/demo-lint-result.js";
+import { BASE, HOSTILE, LONG_VALUE, ROOT, demoResult } from "./helpers/demo-lint-result.js";
 
 const schema: unknown = JSON.parse(readFileSync(new URL("../schema/report.schema.json", import.meta.url), "utf8"));
 const ajv = new Ajv({ allErrors: true, strict: true, allowUnionTypes: true });
@@ -52,5 +52,20 @@ describe("formatJson", () => {
 
   it("counts standing findings and suppressed ones apart", () => {
     expect(report.summary).toEqual({ error: 1, warning: 1, note: 1, suppressed: 1, designs: 2 });
+  });
+});
+
+describe("formatJson paths", () => {
+  it("are relative to the repository root and POSIX, as SARIF and annotations are", () => {
+    // The run names files absolutely (as lint does); the report shows them from the repository root.
+    const result = demoResult();
+    for (const d of result.designs) {
+      d.file = `${ROOT}/${d.file}`;
+      for (const f of d.findings) f.file = `${ROOT}/${f.file}`;
+    }
+    const report = JSON.parse(formatJson(result, BASE)) as { findings: { file: string }[]; designs: { file: string }[] };
+    expect(report.findings.length).toBeGreaterThan(0);
+    for (const f of report.findings) expect(f.file.startsWith("hw/rf board/")).toBe(true);
+    expect(report.designs.map((d) => d.file)).toContain("hw/rf board/front-end.kicad_sch");
   });
 });

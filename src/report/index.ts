@@ -22,7 +22,7 @@ export interface RenderOptions extends PathBase {
   showSuppressed?: boolean;
 }
 
-/** The report in one format. The terminal text is relative to the working directory; the others
+/** The report in one format. The terminal text is relative to the working directory; the others (JSON too)
  * to `root` (repository or workspace), which is what code scanning and annotations resolve against. */
 export function render(format: Format, result: LintResult, options: RenderOptions): string {
   const base = { cwd: options.cwd, root: options.root };
@@ -30,7 +30,7 @@ export function render(format: Format, result: LintResult, options: RenderOption
     case "text":
       return formatText(result, { cwd: options.cwd, root: options.cwd, colors: options.colors ?? noColors, showSuppressed: options.showSuppressed ?? false });
     case "json":
-      return formatJson(result);
+      return formatJson(result, base);
     case "sarif":
       return formatSarif(result, base);
     case "github": {
