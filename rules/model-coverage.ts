@@ -59,7 +59,7 @@ export const modelCoverage: Rule<Context> = {
     if (solverProblem !== undefined) sentences.push(`The design could not be turned into a circuit to solve: ${solverProblem}.`);
     if (opProblem !== undefined) sentences.push(`The DC operating point could not be found: ${opProblem}.`);
     if (unpowered.length > 0) {
-      sentences.push(`No voltage known for ${unpowered.join(", ")}: the operating point treats ${unpowered.length === 1 ? "it" : "them"} as unpowered; give ${unpowered.length === 1 ? "it" : "each"} a voltage under "rails" in loadline.json (e.g. "rails": { "${unpowered[0] ?? "VCC"}": "9V" }).`);
+      sentences.push(`No voltage known for ${unpowered.join(", ")}: the operating point solves ${unpowered.length === 1 ? "it as an ordinary net, powered only through what connects it" : "them as ordinary nets, powered only through what connects them"} to a rail; if ${unpowered.length === 1 ? "it is a supply, give it" : "they are supplies, give each"} a voltage under "rails" in loadline.json (e.g. "rails": { "${unpowered[0] ?? "VCC"}": "9V" }).`);
     }
     if (unmodelled.length > 0) sentences.push(`Not analysed: ${unmodelled.map((u) => `${u.ref} (${u.reason})`).join("; ")}.`);
     if (limitations.length > 0) {

@@ -282,13 +282,19 @@ function checkRail(ctx: Context, rail: CheckedRail, configuredTarget: number, ra
     const bulk = suggestShuntCapacitor(ctx, {
       net: rail.net, frequencies: judgedHz, limit, aimHertz: lowEdge.hertz, like: largest?.part.ref, alsoLike: [undefined], series, spanDecades: 1,
     }, ctx.snapUp(neededFarads, series));
+    // A bulk part with capacitance enough but a lossy ESR (an electrolytic at the table's figure)
+    // needs a different remedy from a missing one: say which it is.
+    const esrLimited = largest !== undefined && largest.model.farads >= neededFarads && largest.model.esr > target.ohms;
+    const cause = esrLimited && largest
+      ? `${largest.part.ref} (${si(largest.model.farads, "F")}) has capacitance enough, but its ESR of ${si(largest.model.esr, "Ω")} (${largest.model.source.includes("from the part's ESR field") ? "from its ESR field" : "estimated for its type and rating; an ESR field overrides it"}) holds |Z| at ${si(lowEdge.magnitude, "Ω")} at the band's low edge ${si(lowEdge.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}; use a low-ESR part, give its ESR field if the datasheet's figure is lower, or add a ceramic of at least ${si(neededFarads, "F")} beside it.`
+      : `no bulk capacitance for the low end — |Z| is ${si(lowEdge.magnitude, "Ω")} (capacitive) at the band's low edge ${si(lowEdge.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}; at least ${si(neededFarads, "F")} is needed there.`;
     findings.push(finding(ctx, ID, {
       at: largest?.part ?? anchor,
       severity: "warning",
-      message: `Rail ${rail.net}: no bulk capacitance for the low end — |Z| is ${si(lowEdge.magnitude, "Ω")} (capacitive) at the band's low edge ${si(lowEdge.hertz, "Hz")}, over the target ${si(target.ohms, "Ω")}; at least ${si(neededFarads, "F")} is needed there.${suggestionText(ctx, bulk, target.ohms)}`,
+      message: `Rail ${rail.net}: ${cause}${suggestionText(ctx, bulk, target.ohms)}`,
       parts: capParts,
       nets: [rail.net],
-      data: { lowEdgeOhms: lowEdge.magnitude, atHertz: lowEdge.hertz, targetOhms: target.ohms, neededFarads, ...suggestionData(bulk) },
+      data: { lowEdgeOhms: lowEdge.magnitude, atHertz: lowEdge.hertz, targetOhms: target.ohms, neededFarads, esrLimited, ...suggestionData(bulk) },
     }));
   }
 

@@ -8,6 +8,8 @@ import { defaultConfig } from "../src/engine/config.js";
 import { readDesign } from "../src/read/index.js";
 import { acFrequencies, acVector, loadRecording } from "./support/ngspice.js";
 import { describeRuleBoards, lintBoard } from "./helpers/rule-boards.js";
+import { railBypass } from "../rules/rail-bypass.js";
+import { resolveRuleOptions } from "../src/engine/rule.js";
 
 /** Series R-L-C branch impedance (reference-data §2.1), complex as [re, im]. */
 function branch(f: number, c: number, esr: number, esl: number): [number, number] {
@@ -81,5 +83,38 @@ describe("rail-bypass: figures recomputed from the series R-L-C model", () => {
     const { findings } = lintBoard(resolve("fixtures/rules/rail-bypass/anti-resonance/anti-resonance.net"));
     const peak = findings.find((f) => f.message.includes("anti-resonate"));
     expect(Math.abs(Number(peak?.data.atHertz) / lossless - 1)).toBeLessThan(0.03);
+  });
+});
+
+describe("rail-bypass: a bulk capacitor held up by its ESR is named as such, not as missing", () => {
+  // jfet-cascode at the default 0.5–30 MHz band: +12V has C5 47 µF 25 V (ESR 2.9 Ω, reference-data
+  // §2.3 first figure for 47 µF / 25 V) beside 100 nF ceramics. At 500 kHz 47 µF is only 6.8 mΩ of
+  // reactance, so the electrolytic's ESR, not its capacitance, sets the floor.
+  const path = resolve("fixtures/jfet-cascode/jfet-cascode.kicad_sch");
+  const read = readDesign(path);
+  if (!read.ok) throw new Error(read.error.message);
+  const ctx = createContext(read.circuit, defaultConfig());
+  const findings = railBypass.check(ctx, resolveRuleOptions(railBypass, undefined));
+  const low = findings.find((f) => f.data.esrLimited === true);
+
+  it("says the ESR limits the low end and names the part", () => {
+    expect(low?.message).toContain("C5 (47 µF) has capacitance enough, but its ESR of 2.9 Ω");
+    expect(low?.message).not.toContain("no bulk capacitance");
+  });
+
+  it("reports |Z| at the low edge as the rail capacitors' series R-L-C branches in parallel (reference-data §2.1)", () => {
+    const f = Number(low?.data.atHertz);
+    let yRe = 0;
+    let yIm = 0;
+    for (const c of ctx.groundingCapacitors("+12V")) {
+      const m = ctx.capacitor(c.ref);
+      if (!m) continue;
+      const [re, im] = branch(f, m.farads, m.esr, m.esl);
+      const d = re * re + im * im;
+      yRe += re / d;
+      yIm -= im / d;
+    }
+    const z = 1 / Math.hypot(yRe, yIm);
+    expect(Math.abs(Number(low?.data.lowEdgeOhms) / z - 1)).toBeLessThan(0.02);
   });
 });
