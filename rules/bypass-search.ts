@@ -5,6 +5,8 @@
 import type { ESeriesName } from "../src/engine/config.js";
 import type { CapacitorModel, Context } from "../src/engine/context.js";
 import type { ComplexPoint } from "../src/engine/context-types.js";
+import { faradsForSelfResonance } from "../src/solve/reactance.js";
+export { faradsForReactance } from "../src/solve/reactance.js";
 
 export interface CapacitorSuggestion {
   farads: number;
@@ -41,12 +43,7 @@ export function faradsForResonance(ctx: Context, hertz: number, like?: string): 
   // ESL is a property of the package, nearly independent of value: read it from a 100 nF stand-in.
   const esl = ctx.capacitorLike(like, 100e-9)?.esl;
   if (esl === undefined || !(esl > 0)) return undefined;
-  return 1 / ((2 * Math.PI * hertz) ** 2 * esl);
-}
-
-/** The capacitance whose reactance is `ohms` at `hertz`: C = 1/(2πfX). */
-export function faradsForReactance(ohms: number, hertz: number): number {
-  return 1 / (2 * Math.PI * hertz * ohms);
+  return faradsForSelfResonance(hertz, esl);
 }
 
 export function worstAgainst(points: ComplexPoint[], limit: (hertz: number) => number): { ratio: number; ohms: number; hertz: number } {

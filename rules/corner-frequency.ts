@@ -38,6 +38,7 @@ import type { Rule } from "../src/engine/rule.js";
 import type { Element } from "../src/solve/netlist.js";
 import type { Finding, RuleDoc } from "../src/engine/types.js";
 import { bandText, byRef, finding, numberOption, si } from "./support.js";
+import { faradsForReactance, highPassCorner, highPassLossDb } from "../src/solve/reactance.js";
 
 const ID = "corner-frequency";
 
@@ -205,13 +206,13 @@ export const cornerFrequency: Rule<Context> = {
         continue;
       }
       const ohms = seen.magnitude;
-      const corner = 1 / (2 * Math.PI * ohms * farads);
+      const corner = highPassCorner(ohms, farads);
       const allowed = fLow / margin;
       if (corner <= allowed * (1 + 1e-9)) continue;
-      const neededFarads = margin / (2 * Math.PI * fLow * ohms);
+      const neededFarads = faradsForReactance(ohms, fLow / margin);
       const suggested = ctx.snapUp(neededFarads, series);
       const severe = corner > fLow;
-      const lossDb = 10 * Math.log10(1 + (corner / fLow) ** 2);
+      const lossDb = highPassLossDb(fLow, corner);
       const who = c.device ? ` of ${c.device.ref}` : "";
       const nets = c.role === "coupling" ? `between ${c.a} and ${c.b}` : `on ${c.a}`;
       findings.push(finding(ctx, ID, {
