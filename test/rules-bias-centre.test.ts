@@ -7,16 +7,11 @@ import { biasCentre } from "../rules/bias-centre.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
 import { kicadNetlist } from "../fixtures/rules/netlist-writer.js";
-import { rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
+import { num, rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
 import { opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/bias-centre");
 
-function num(f: Finding | undefined, key: string): number {
-  const v = f?.data[key];
-  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
-  return v;
-}
 
 /** Datasheet VCE(sat) of the 2N3904, ≤ 0.2 V at IC 10 mA, IB 1 mA (reference-data §4.5). */
 const VCE_SAT = 0.2;

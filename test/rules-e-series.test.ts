@@ -10,22 +10,12 @@ import { eSeries } from "../rules/e-series.js";
 import { kicadNetlist } from "../fixtures/rules/netlist-writer.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
-import { rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
+import { num, numbers, rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
 import { opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/e-series");
 
-function numbers(f: Finding | undefined, key: string): number[] {
-  const v = f?.data[key];
-  if (!Array.isArray(v) || !v.every((x) => typeof x === "number")) throw new Error(`data.${key} is not a number list: ${JSON.stringify(v)}`);
-  return v as number[];
-}
 
-function num(f: Finding | undefined, key: string): number {
-  const v = f?.data[key];
-  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
-  return v;
-}
 
 /** VCE1, VCE2 and IC1, IC2 of the cascode deck's operating point (Q1 lower, Q2 upper). */
 function cascodeFigures(deck: string): Array<{ label: string; vce: [number, number]; ic: [number, number] }> {

@@ -8,17 +8,12 @@ import { gateProtection } from "../rules/gate-protection.js";
 import { kicadNetlist } from "../fixtures/rules/netlist-writer.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
-import { rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
+import { num, rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
 import { opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/gate-protection");
 const board = (name: string): string => join(FOLDER, `${name}.net`);
 
-function num(f: Finding | undefined, key: string): number {
-  const v = f?.data[key];
-  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
-  return v;
-}
 
 describe("gate-protection on the fixture boards", () => {
   for (const { expected, board: path } of expectedBoards(FOLDER)) {

@@ -7,18 +7,13 @@ import { ratings } from "../rules/ratings.js";
 import { kicadNetlist } from "../fixtures/rules/netlist-writer.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
-import { rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
+import { num, rel, ruleFindings, ruleFindingsInMemory } from "./helpers/run-rule.js";
 import { opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/ratings");
 const board = (name: string): string => join(FOLDER, `${name}.net`);
 const byPart = (found: Finding[], ref: string): Finding | undefined => found.find((f) => f.parts.includes(ref));
 
-function num(f: Finding | undefined, key: string): number {
-  const v = f?.data[key];
-  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
-  return v;
-}
 
 describe("ratings on the fixture boards", () => {
   for (const { expected, board: path } of expectedBoards(FOLDER)) {

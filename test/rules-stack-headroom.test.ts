@@ -7,23 +7,13 @@ import { describe, expect, it } from "vitest";
 import { stackHeadroom } from "../rules/stack-headroom.js";
 import type { Finding } from "../src/engine/types.js";
 import { checkExpected, expectedBoards } from "./helpers/expectations.js";
-import { rel, ruleFindings } from "./helpers/run-rule.js";
+import { num, numbers, rel, ruleFindings } from "./helpers/run-rule.js";
 import { acFrequencies, acVector, opValue, referenceRuns } from "./support/ngspice.js";
 
 const FOLDER = join(process.cwd(), "fixtures/rules/stack-headroom");
 const board = (name: string): string => join(FOLDER, name, `${name}.net`);
 
-function numbers(f: Finding | undefined, key: string): number[] {
-  const v = f?.data[key];
-  if (!Array.isArray(v) || !v.every((x) => typeof x === "number")) throw new Error(`data.${key} is not a number list: ${JSON.stringify(v)}`);
-  return v as number[];
-}
 
-function num(f: Finding | undefined, key: string): number {
-  const v = f?.data[key];
-  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
-  return v;
-}
 
 /** VCE1 = V(c1) − V(e1), VCE2 = V(c2) − V(c1) of a cascode deck (Q1 lower, Q2 upper). */
 function cascodeVce(deck: string): Array<{ label: string; vce: [number, number]; vc2: number }> {

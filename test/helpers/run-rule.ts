@@ -29,3 +29,17 @@ export function ruleFindingsInMemory(rule: Rule<Context>, files: Record<string, 
 export function rel(a: number, b: number): number {
   return Math.abs(a - b) / Math.abs(b);
 }
+
+/** A number figure of a finding's data, or a thrown error saying what was there instead. */
+export function num(f: Finding | undefined, key: string): number {
+  const v = f?.data[key];
+  if (typeof v !== "number") throw new Error(`data.${key} is not a number: ${JSON.stringify(v)}`);
+  return v;
+}
+
+/** A list-of-numbers figure of a finding's data. */
+export function numbers(f: Finding | undefined, key: string): number[] {
+  const v = f?.data[key];
+  if (!Array.isArray(v) || !v.every((x) => typeof x === "number")) throw new Error(`data.${key} is not a number list: ${JSON.stringify(v)}`);
+  return v as number[];
+}
