@@ -6,8 +6,10 @@ import type { BiasReport, DeviceBias } from "../engine/bias.js";
 import { biasReport } from "../engine/bias.js";
 import { lint } from "../engine/lint.js";
 import { formatQuantity } from "../circuit/units.js";
+import type { CommandIo } from "./process-io.js";
+import { processIo } from "./process-io.js";
 
-interface Io { stdout: (s: string) => void; stderr: (s: string) => void; cwd: string }
+type Io = Pick<CommandIo, "stdout" | "stderr" | "cwd">;
 
 function pad(cells: string[][]): string[] {
   const widths: number[] = [];
@@ -72,10 +74,6 @@ export function register(program: Command): void {
     .option("--json", "one JSON object per design (SI units)")
     .option("-c, --config <file>", "config file (default: the nearest loadline.json above each design)")
     .action((files: string[], opts: { json?: boolean; config?: string }) => {
-      process.exitCode = runBias(files, { json: opts.json === true, ...(opts.config !== undefined ? { config: opts.config } : {}) }, {
-        stdout: (s) => process.stdout.write(s),
-        stderr: (s) => process.stderr.write(s),
-        cwd: process.cwd(),
-      });
+      process.exitCode = runBias(files, { json: opts.json === true, ...(opts.config !== undefined ? { config: opts.config } : {}) }, processIo());
     });
 }

@@ -12,6 +12,8 @@ import { createColors } from "../report/colors.js";
 import type { Format } from "../report/index.js";
 import { FORMATS, isFormat, render } from "../report/index.js";
 import { findRepositoryRoot } from "./repo-root.js";
+import type { CommandIo } from "./process-io.js";
+import { processIo } from "./process-io.js";
 
 interface Output {
   format: Format;
@@ -63,7 +65,7 @@ function writeReport(file: string, text: string): string | undefined {
 }
 
 /** Runs a check and writes its reports; returns the exit code (0, 1, 2 as design.md states). */
-export function runCheck(paths: string[], options: CheckOptions, io: { stdout: (s: string) => void; stderr: (s: string) => void; cwd: string; isTTY: boolean; env: NodeJS.ProcessEnv }): number {
+export function runCheck(paths: string[], options: CheckOptions, io: CommandIo): number {
   const outputs = options.format.length > 0 ? options.format : [{ format: "text" as const }];
   const toStdout = outputs.filter((o) => o.file === undefined);
   if (toStdout.length > 1) {
@@ -108,13 +110,7 @@ export function register(program: Command): void {
     .option("--no-color", "plain text without colours")
     .option("--show-suppressed", "list suppressed findings in the text report, not just their count")
     .action((paths: string[] | undefined, opts: { failOn: FailOn; config?: string; color: boolean; showSuppressed?: boolean }) => {
-      const code = runCheck(paths ?? [], { format: collect.list, failOn: opts.failOn, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}), ...(opts.showSuppressed ? { showSuppressed: true } : {}) }, {
-        stdout: (s) => process.stdout.write(s),
-        stderr: (s) => process.stderr.write(s),
-        cwd: process.cwd(),
-        isTTY: process.stdout.isTTY === true,
-        env: process.env,
-      });
+      const code = runCheck(paths ?? [], { format: collect.list, failOn: opts.failOn, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}), ...(opts.showSuppressed ? { showSuppressed: true } : {}) }, processIo());
       process.exitCode = code;
     });
 }

@@ -6,6 +6,8 @@
 import type { Command } from "commander";
 import { createColors, type Colors } from "../report/colors.js";
 import { fixExitCode, runFix, type FixReport, type FixRequest } from "../fix/run.js";
+import type { CommandIo } from "./process-io.js";
+import { processIo } from "./process-io.js";
 
 export interface FixCommandOptions {
   rule: string[];
@@ -14,13 +16,7 @@ export interface FixCommandOptions {
   color: boolean;
 }
 
-export interface FixIo {
-  stdout: (s: string) => void;
-  stderr: (s: string) => void;
-  cwd: string;
-  isTTY: boolean;
-  env: NodeJS.ProcessEnv;
-}
+export type FixIo = CommandIo;
 
 /** Runs the command; returns the exit code. `request` lets tests inject file systems and rules. */
 export function runFixCommand(paths: string[], options: FixCommandOptions, io: FixIo, request: Partial<FixRequest> = {}): number {
@@ -92,13 +88,7 @@ export function register(program: Command): void {
         "still be wrong for power, voltage or safety ratings the schematic does not state.",
     )
     .action((paths: string[] | undefined, opts: { rule?: string[]; dryRun?: boolean; config?: string; color: boolean }) => {
-      const code = runFixCommand(paths ?? [], { rule: opts.rule ?? [], dryRun: opts.dryRun ?? false, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}) }, {
-        stdout: (s) => process.stdout.write(s),
-        stderr: (s) => process.stderr.write(s),
-        cwd: process.cwd(),
-        isTTY: process.stdout.isTTY === true,
-        env: process.env,
-      });
+      const code = runFixCommand(paths ?? [], { rule: opts.rule ?? [], dryRun: opts.dryRun ?? false, color: opts.color, ...(opts.config !== undefined ? { config: opts.config } : {}) }, processIo());
       process.exitCode = code;
     });
 }
