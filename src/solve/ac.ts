@@ -83,26 +83,23 @@ export function acSweep(
   const stamp = new ComplexStamper(system);
   const xr = new Float64Array(n), xi = new Float64Array(n);
   const ctx: AcLoadContext = { omega: 0, excitedSource };
-  // Output series resolved once, in unknown order, so the per-frequency copy is a flat loop.
+  // Output series resolved once, in unknown order, all in one buffer: series o keeps its real
+  // parts at [2oL, 2oL + L) and its imaginary parts right after, so the per-frequency copy is a
+  // flat loop.
+  const L = frequencies.length;
   const nodeVoltages: Record<string, ComplexSeries> = {};
   const branchCurrents: Record<string, ComplexSeries> = {};
   const outIndex: number[] = [];
-  const outSeries: ComplexSeries[] = [];
-  unknowns.info.forEach((info, i) => {
-    if (info.kind !== "node") return;
-    const s = series(frequencies.length);
-    nodeVoltages[info.name] = s;
-    outIndex.push(i);
-    outSeries.push(s);
-  });
-  for (const d of devices) {
-    if (d.branch === undefined) continue;
-    const s = series(frequencies.length);
-    branchCurrents[d.name] = s;
-    outIndex.push(d.branch);
-    outSeries.push(s);
-  }
-  const shunted = passiveOnly ? unknowns.info.flatMap((info, i) => (info.kind !== "branch" ? [i] : [])) : [];
+  for (let i = 0; i < unknowns.nodeCount; i++) outIndex.push(i);
+  for (const d of devices) if (d.branch !== undefined) outIndex.push(d.branch);
+  const outputs = new Float64Array(2 * L * outIndex.length).fill(NaN);
+  const outOf = (o: number): ComplexSeries => ({ re: outputs.subarray(2 * o * L, (2 * o + 1) * L), im: outputs.subarray((2 * o + 1) * L, (2 * o + 2) * L) });
+  for (let i = 0; i < unknowns.nodeCount; i++) nodeVoltages[unknowns.nodeName(i)] = outOf(i);
+  let o = unknowns.nodeCount;
+  for (const d of devices) if (d.branch !== undefined) branchCurrents[d.name] = outOf(o++);
+  const outUnknown = Int32Array.from(outIndex);
+  const shunted: number[] = [];
+  if (passiveOnly) for (let i = 0; i < n; i++) if (!unknowns.isBranch(i)) shunted.push(i);
   let problem: string | undefined;
 
   // Everything affine in ω is assembled twice (ω = 0 and ω = 1) and then interpolated per point;
@@ -122,7 +119,14 @@ export function acSweep(
     system.saveAffinePart(which);
   }
 
-  for (let k = 0; k < frequencies.length; k++) {
+  const store = (k: number, re: Float64Array, im: Float64Array): void => {
+    for (let o = 0, at = k; o < outUnknown.length; o++, at += 2 * L) {
+      const index = outUnknown[o] as number;
+      outputs[at] = re[index] as number;
+      outputs[at + L] = im[index] as number;
+    }
+  };
+  const single = (k: number): void => {
     const f = frequencies[k] as number;
     ctx.omega = 2 * Math.PI * f;
     system.beginAt(ctx.omega);
@@ -130,14 +134,21 @@ export function acSweep(
     const solved = system.solve(xr, xi);
     if (!solved.ok) {
       problem ??= `the small-signal matrix is singular at ${unknowns.describe(solved.singularUnknown)} (${f} Hz)`;
+      return;
+    }
+    store(k, xr, xi);
+  };
+  // With nothing stamped per point, two frequencies share one pass over the factorisation plan.
+  const yr = perPoint.length === 0 ? new Float64Array(n) : xr, yi = perPoint.length === 0 ? new Float64Array(n) : xi;
+  for (let k = 0; k < L; k++) {
+    if (perPoint.length === 0 && k > 0 && k + 1 < L &&
+        system.solveAffinePair(2 * Math.PI * (frequencies[k] as number), 2 * Math.PI * (frequencies[k + 1] as number), xr, xi, yr, yi)) {
+      store(k, xr, xi);
+      store(k + 1, yr, yi);
+      k++;
       continue;
     }
-    for (let o = 0; o < outIndex.length; o++) {
-      const s = outSeries[o] as ComplexSeries;
-      const index = outIndex[o] as number;
-      s.re[k] = xr[index] as number;
-      s.im[k] = xi[index] as number;
-    }
+    single(k);
   }
 
   const result: AcResult = { frequencies: [...frequencies], nodeVoltages, branchCurrents };

@@ -5,9 +5,9 @@
 // a wall-clock deadline, so a hopeless circuit returns a reason instead of hanging.
 
 import { TOLERANCES, type DcLoadContext, type DcMode, type Device } from "./device.js";
-import { diagnoseTopology } from "./diagnose.js";
 import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
-import { RealSystem, type Unknown } from "./mna.js";
+import { RealSystem, type PatternSnapshot, type Unknown } from "./mna.js";
+import { preparedCircuit } from "./prepared.js";
 import type { SolverCircuit } from "./netlist.js";
 import { RealStamper } from "./stamp.js";
 import type { DeviceOperatingPoint, OperatingPoint, SolveMethod } from "./types.js";
@@ -59,6 +59,10 @@ class DcSolver {
   readonly ctx: DcLoadContext;
   private baseReady = false;
   private readonly varying: Device[];
+  /** Absolute part of each unknown's convergence tolerance: ABSTOL for currents, VNTOL for voltages. */
+  private readonly absTol: Float64Array;
+  /** Unknowns that are node voltages, where gmin stepping puts its shunts. */
+  private readonly voltageUnknowns: Int32Array;
   /** Last device whose junction step was limited in the latest load, for the explanation. */
   private lastLimiting: string | undefined;
 
@@ -67,14 +71,25 @@ class DcSolver {
     readonly gmin: number,
     readonly maxIterations: number,
     readonly deadline: number,
+    pattern: PatternSnapshot | null,
   ) {
     const n = elaborated.unknowns.size;
-    this.system = new RealSystem(n);
+    this.system = new RealSystem(n, pattern ?? undefined, 3 * n);
     this.stamp = new RealStamper(this.system);
-    this.x = new Float64Array(n);
-    this.xNew = new Float64Array(n);
+    const arena = this.system.arena;
+    this.x = arena.f64(n);
+    this.xNew = arena.f64(n);
+    this.absTol = arena.f64(n);
     this.ctx = { mode: "normal", gmin, srcFactor: 1, limited: false };
     this.varying = elaborated.devices.filter((d) => !d.dcConstant);
+    let voltages = 0;
+    for (let i = 0; i < n; i++) {
+      const branch = elaborated.unknowns.isBranch(i);
+      this.absTol[i] = branch ? ABSTOL : VNTOL;
+      if (!branch) voltages++;
+    }
+    this.voltageUnknowns = arena.i32(voltages);
+    for (let i = 0, v = 0; i < n; i++) if (!elaborated.unknowns.isBranch(i)) this.voltageUnknowns[v++] = i;
   }
 
   private load(x: Float64Array, mode: DcMode, srcFactor: number, diagGmin: number): void {
@@ -99,13 +114,17 @@ class DcSolver {
       ctx.limited ||= before;
     }
     if (diagGmin > 0) {
-      const info = this.elaborated.unknowns.info;
-      for (let i = 0; i < info.length; i++) if (info[i]?.kind !== "branch") this.system.add(i, i, diagGmin);
+      const voltages = this.voltageUnknowns;
+      for (let v = 0; v < voltages.length; v++) {
+        const i = voltages[v] as number;
+        this.system.add(i, i, diagGmin);
+      }
     }
   }
 
   newton(run: NewtonRun): NewtonOutcome {
-    const info = this.elaborated.unknowns.info;
+    const absTol = this.absTol;
+    const n = absTol.length;
     for (let iter = 0; iter < run.limit; iter++) {
       if (this.totalIterations >= this.maxIterations) return { ok: false, iterations: iter, reason: "iteration-cap" };
       if (Date.now() >= this.deadline) return { ok: false, iterations: iter, reason: "deadline" };
@@ -115,10 +134,11 @@ class DcSolver {
       const solved = this.system.solve(this.xNew);
       if (!solved.ok) return { ok: false, iterations: iter + 1, reason: "singular", unknown: solved.singularUnknown };
       let worstUnknown = -1, worstRatio = 0, worstStep = 0, finite = true;
-      for (let i = 0; i < info.length; i++) {
-        const xn = this.xNew[i] as number, xo = this.x[i] as number;
+      const xNew = this.xNew, x = this.x;
+      for (let i = 0; i < n; i++) {
+        const xn = xNew[i] as number, xo = x[i] as number;
         if (!Number.isFinite(xn)) { finite = false; break; }
-        const tol = RELTOL * Math.max(Math.abs(xn), Math.abs(xo)) + (info[i]?.kind === "branch" ? ABSTOL : VNTOL);
+        const tol = RELTOL * Math.max(Math.abs(xn), Math.abs(xo)) + (absTol[i] as number);
         const ratio = Math.abs(xn - xo) / tol;
         if (ratio > worstRatio) { worstRatio = ratio; worstUnknown = i; worstStep = xn - xo; }
       }
@@ -272,10 +292,20 @@ export interface SolvedState {
   x: Float64Array;
 }
 
-const solvedStates = new WeakMap<OperatingPoint, SolvedState>();
+/**
+ * The solved state rides on the result object under a non-enumerable symbol, so it lives exactly
+ * as long as the result and stays out of equality checks, spreads and JSON. (A WeakMap keyed by
+ * the result did the same, but its entries outlive young-generation collections and every solve
+ * then paid for a full one.)
+ */
+const SOLVED_STATE = Symbol("loadline solved state");
+
+interface CarriesSolvedState {
+  [SOLVED_STATE]?: SolvedState;
+}
 
 export function solvedStateOf(op: OperatingPoint): SolvedState | undefined {
-  return solvedStates.get(op);
+  return (op as OperatingPoint & CarriesSolvedState)[SOLVED_STATE];
 }
 
 function emptyResult(problem: string): OperatingPoint {
@@ -297,9 +327,7 @@ function collectResult(solver: DcSolver, converged: boolean, method: SolveMethod
   if (!x.every(Number.isFinite)) x.fill(0);
   solver.finalEvaluation(1);
   const nodeVoltages: Record<string, number> = {};
-  unknowns.info.forEach((info, i) => {
-    if (info.kind === "node") nodeVoltages[info.name] = x[i] as number;
-  });
+  for (let i = 0; i < unknowns.nodeCount; i++) nodeVoltages[unknowns.nodeName(i)] = x[i] as number;
   const branchCurrents: Record<string, number> = {};
   const deliveredCurrents: Record<string, number> = {};
   const deviceReports: Record<string, DeviceOperatingPoint> = {};
@@ -318,7 +346,7 @@ function collectResult(solver: DcSolver, converged: boolean, method: SolveMethod
     devices: deviceReports,
   };
   if (problem !== undefined) result.problem = problem;
-  solvedStates.set(result, { elaborated: solver.elaborated, x: x.slice() });
+  Object.defineProperty(result, SOLVED_STATE, { value: { elaborated: solver.elaborated, x: x.slice() } satisfies SolvedState });
   return result;
 }
 
@@ -327,15 +355,15 @@ function collectResult(solver: DcSolver, converged: boolean, method: SolveMethod
  * `converged: false` comes with a `problem` saying why, in the trade's words.
  */
 export function solveOperatingPoint(circuit: SolverCircuit, opts: DcOptions = {}): OperatingPoint {
-  const topology = diagnoseTopology(circuit);
-  if (topology.length > 0) return emptyResult(topology.map((p) => p.message).join("; "));
+  const prepared = preparedCircuit(circuit);
+  if (prepared.problems.length > 0) return emptyResult(prepared.problems.map((p) => p.message).join("; "));
 
   const maxIterations = Math.max(1, Math.floor(opts.maxIterations ?? DEFAULT_MAX_ITERATIONS));
   const maxMillis = Math.max(0, opts.maxMillis ?? DEFAULT_MAX_MILLIS);
   const gmin = opts.gmin ?? DEFAULT_GMIN;
-  const solver = new DcSolver(elaborate(circuit), gmin, maxIterations, Date.now() + maxMillis);
-
+  const solver = new DcSolver(elaborate(circuit, prepared.numbering), gmin, maxIterations, Date.now() + maxMillis, prepared.dcPattern);
   const plain = plainNewton(solver);
+  prepared.dcPattern ??= solver.system.firstPattern;
   if (plain.ok) return collectResult(solver, true, "newton");
   if (plain.failure?.reason === "singular") {
     return collectResult(solver, false, "newton", singularMessage(solver, plain.failure.unknown));

@@ -3,6 +3,7 @@
 // describe its operating point. Nothing here knows what a transistor is.
 
 import type { UnknownMap } from "./mna.js";
+import type { ModelCard } from "./netlist.js";
 import type { ComplexStamp, RealStamp, Unknown } from "./stamp.js";
 import type { DeviceOperatingPoint } from "./types.js";
 
@@ -71,5 +72,29 @@ export interface Device {
   delivered?(x: Float64Array, srcFactor: number): number;
 }
 
+/**
+ * Constants a model derives from a card and an element size, shared by the elements of one
+ * elaboration (a board's transistors mostly share a card). Lives for one elaboration only: a
+ * card edited in place between solves is read afresh by the next.
+ */
+export class ElaborationMemo {
+  private readonly byKind = new Map<object, Map<ModelCard, Map<string | number, unknown>>>();
+
+  /**
+   * `make()`, or what it returned for the same kind, card and size earlier in this elaboration.
+   * `kind` must be the model's own (its parameter table), so one kind always stores one type.
+   */
+  derived<T>(kind: object, card: ModelCard, size: string | number, make: () => T): T {
+    let cards = this.byKind.get(kind);
+    if (!cards) this.byKind.set(kind, (cards = new Map()));
+    let sizes = cards.get(card);
+    if (!sizes) cards.set(card, (sizes = new Map()));
+    if (sizes.has(size)) return sizes.get(size) as T;
+    const made = make();
+    sizes.set(size, made);
+    return made;
+  }
+}
+
 /** Turns one element into a device, allocating any internal nodes and branches it needs. */
-export type DeviceFactory<E> = (element: E, unknowns: UnknownMap) => Device;
+export type DeviceFactory<E> = (element: E, unknowns: UnknownMap, memo?: ElaborationMemo) => Device;

@@ -2,7 +2,7 @@
 // trade's words instead of "pivot 17 is zero": nodes with no DC path to ground, and loops made
 // only of voltage sources and/or ideal inductors (no defined DC current).
 
-import { elementNodes, validateElements } from "./elaborate.js";
+import { nodeNumbering, validateElements, type NodeNumbering } from "./elaborate.js";
 import type { Element, SolverCircuit } from "./netlist.js";
 
 export type TopologyProblemKind = "no-dc-path" | "source-loop" | "invalid-value";
@@ -40,19 +40,6 @@ class DisjointSets {
   }
 }
 
-/** Pairs of nodes an element connects with a DC current path (junctions included, gates not). */
-function dcPaths(el: Element): Array<[string, string]> {
-  switch (el.kind) {
-    case "R": case "L": return [[el.a, el.b]];
-    case "V": return [[el.pos, el.neg]];
-    case "C": case "I": return [];
-    case "D": return [[el.anode, el.cathode]];
-    case "Q": return [[el.b, el.e], [el.b, el.c]];
-    case "J": return [[el.g, el.s], [el.g, el.d], [el.d, el.s]];
-    case "M": return [[el.d, el.s], [el.d, el.b], [el.s, el.b]];
-  }
-}
-
 function list(names: string[]): string {
   if (names.length <= 1) return names.join("");
   return `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
@@ -77,25 +64,55 @@ function describeBlockers(group: Set<string>, elements: readonly Element[]): { p
   return { phrase: list(parts), names: [...caps, ...currents, ...gates] };
 }
 
-function floatingNodeProblems(circuit: SolverCircuit): TopologyProblem[] {
-  const sets = new DisjointSets();
-  const allNodes = new Set<string>();
-  for (const el of circuit.elements) for (const n of elementNodes(el)) allNodes.add(n);
-  allNodes.delete("0");
-  for (const el of circuit.elements) for (const [a, b] of dcPaths(el)) sets.union(a, b);
-  const groundRoot = sets.find("0");
-  const groups = new Map<string, Set<string>>();
-  for (const n of allNodes) {
-    const root = sets.find(n);
+/** Union–find over node numbers; ground is the extra element `size`. */
+function unionFind(size: number): { find: (x: number) => number; union: (a: number, b: number) => void } {
+  const parent = new Int32Array(size + 1);
+  for (let i = 0; i <= size; i++) parent[i] = i;
+  const find = (x: number): number => {
+    let root = x;
+    while ((parent[root] as number) !== root) root = parent[root] as number;
+    for (let node = x; node !== root; ) {
+      const next = parent[node] as number;
+      parent[node] = root;
+      node = next;
+    }
+    return root;
+  };
+  return { find, union: (a, b) => { const ra = find(a), rb = find(b); if (ra !== rb) parent[ra] = rb; } };
+}
+
+function floatingNodeProblems(circuit: SolverCircuit, numbering: NodeNumbering): TopologyProblem[] {
+  const { names, index } = numbering;
+  const ground = names.length;
+  const id = (name: string): number => (name === "0" ? ground : (index.get(name) as number));
+  const sets = unionFind(names.length);
+  for (const el of circuit.elements) {
+    // Pairs of nodes an element connects with a DC current path (junctions included, gates not).
+    switch (el.kind) {
+      case "R": case "L": sets.union(id(el.a), id(el.b)); break;
+      case "V": sets.union(id(el.pos), id(el.neg)); break;
+      case "C": case "I": break;
+      case "D": sets.union(id(el.anode), id(el.cathode)); break;
+      case "Q": sets.union(id(el.b), id(el.e)); sets.union(id(el.b), id(el.c)); break;
+      case "J": sets.union(id(el.g), id(el.s)); sets.union(id(el.g), id(el.d)); sets.union(id(el.d), id(el.s)); break;
+      case "M": sets.union(id(el.d), id(el.s)); sets.union(id(el.d), id(el.b)); sets.union(id(el.s), id(el.b)); break;
+    }
+  }
+  const groundRoot = sets.find(ground);
+  let groups: Map<number, Set<string>> | null = null;
+  for (let i = 0; i < names.length; i++) {
+    const root = sets.find(i);
     if (root === groundRoot) continue;
+    groups ??= new Map();
     let group = groups.get(root);
     if (!group) groups.set(root, (group = new Set<string>()));
-    group.add(n);
+    group.add(names[i] as string);
   }
+  if (!groups) return [];
   const problems: TopologyProblem[] = [];
   for (const group of groups.values()) {
     const nodes = [...group].sort();
-    const { phrase, names } = describeBlockers(group, circuit.elements);
+    const { phrase, names: blockers } = describeBlockers(group, circuit.elements);
     const subject = nodes.length === 1 ? `node ${nodes[0]} has` : `nodes ${nodes.join(", ")} have`;
     let why: string;
     if (!phrase) why = nodes.length === 1 ? "nothing else connects to it" : "nothing connects them to the rest of the circuit";
@@ -105,7 +122,7 @@ function floatingNodeProblems(circuit: SolverCircuit): TopologyProblem[] {
     problems.push({
       kind: "no-dc-path",
       nodes,
-      elements: names,
+      elements: blockers,
       message: `${subject} no DC path to ground (${why}); ${fix}`,
     });
   }
@@ -195,9 +212,10 @@ function sourceLoopProblems(circuit: SolverCircuit): TopologyProblem[] {
 
 /**
  * Everything that would make the MNA matrix singular or the input unusable, worded for a
- * designer. Empty when the circuit can be solved.
+ * designer. Empty when the circuit can be solved. `numbering` may be passed when the caller has
+ * already numbered the nodes (the solver, which elaborates with the same numbering).
  */
-export function diagnoseTopology(circuit: SolverCircuit): TopologyProblem[] {
+export function diagnoseTopology(circuit: SolverCircuit, numbering?: NodeNumbering): TopologyProblem[] {
   const invalid = validateElements(circuit).map<TopologyProblem>((message) => ({
     kind: "invalid-value",
     nodes: [],
@@ -208,9 +226,11 @@ export function diagnoseTopology(circuit: SolverCircuit): TopologyProblem[] {
   if (circuit.elements.length === 0) {
     return [{ kind: "no-dc-path", nodes: [], elements: [], message: "the circuit has no elements" }];
   }
-  const touchesGround = circuit.elements.some((el) => elementNodes(el).includes("0"));
-  if (!touchesGround) {
+  const nodes = numbering ?? nodeNumbering(circuit);
+  if (!nodes.touchesGround) {
     return [{ kind: "no-dc-path", nodes: [], elements: [], message: "no element connects to ground (node 0); every voltage is undefined" }];
   }
-  return [...sourceLoopProblems(circuit), ...floatingNodeProblems(circuit)];
+  const loops = sourceLoopProblems(circuit);
+  const floating = floatingNodeProblems(circuit, nodes);
+  return loops.length === 0 ? floating : floating.length === 0 ? loops : [...loops, ...floating];
 }

@@ -4,6 +4,12 @@
 // a good pivot candidate. Exact elimination graph with explicit cliques: quadratic in the worst
 // case, but circuit nodes are eliminated low-degree first, so a 3000-unknown ladder orders in
 // milliseconds.
+//
+// Neighbour lists are plain arrays kept in first-insertion order, and ties between equal degrees
+// go to the most recently re-bucketed vertex; both are part of the order's definition (the same
+// matrix always gets the same order, hence the same factors to the last bit).
+
+import { int32Views } from "./views.js";
 
 /** Column-compressed sparsity pattern of an n × n matrix (row indices per column). */
 export interface CscPattern {
@@ -12,70 +18,113 @@ export interface CscPattern {
   rowIdx: Int32Array;
 }
 
-export function minimumDegreeOrder(pattern: CscPattern): Int32Array {
+/**
+ * Neighbours of every vertex in A + Aᵀ, each list in the order a column-by-column scan of A
+ * first meets them: for vertex v, the columns c < v that have an entry in row v, then the rows of
+ * column v, then the columns c > v with an entry in row v.
+ */
+function symmetricNeighbours(pattern: CscPattern): number[][] {
   const { n, colPtr, rowIdx } = pattern;
-  const adjacency: Set<number>[] = [];
-  for (let i = 0; i < n; i++) adjacency.push(new Set<number>());
-  for (let col = 0; col < n; col++) {
-    const end = colPtr[col + 1] ?? 0;
-    for (let p = colPtr[col] ?? 0; p < end; p++) {
-      const row = rowIdx[p] ?? 0;
-      if (row === col) continue;
-      adjacency[row]?.add(col);
-      adjacency[col]?.add(row);
+  const nnz = colPtr[n] as number;
+  // Row-wise view (columns ascending within each row) by a counting sort of the CSC entries.
+  const [rowPtr, next, colIdx, mark] = int32Views([n + 1, n, nnz, n] as const);
+  for (let p = 0; p < nnz; p++) { const r = (rowIdx[p] as number) + 1; rowPtr[r] = (rowPtr[r] as number) + 1; }
+  for (let r = 0; r < n; r++) rowPtr[r + 1] = (rowPtr[r + 1] as number) + (rowPtr[r] as number);
+  next.set(rowPtr.subarray(0, n));
+  for (let c = 0; c < n; c++) {
+    const end = colPtr[c + 1] as number;
+    for (let p = colPtr[c] as number; p < end; p++) {
+      const r = rowIdx[p] as number;
+      const at = next[r] as number;
+      colIdx[at] = c;
+      next[r] = at + 1;
     }
   }
+  mark.fill(-1);
+  const lists: number[][] = new Array<number[]>(n);
+  for (let v = 0; v < n; v++) {
+    const list: number[] = [];
+    mark[v] = v;
+    const rEnd = rowPtr[v + 1] as number;
+    let q = rowPtr[v] as number;
+    for (; q < rEnd && (colIdx[q] as number) < v; q++) {
+      const c = colIdx[q] as number;
+      if (mark[c] !== v) { mark[c] = v; list.push(c); }
+    }
+    const cEnd = colPtr[v + 1] as number;
+    for (let p = colPtr[v] as number; p < cEnd; p++) {
+      const r = rowIdx[p] as number;
+      if (mark[r] !== v) { mark[r] = v; list.push(r); }
+    }
+    for (; q < rEnd; q++) {
+      const c = colIdx[q] as number;
+      if (mark[c] !== v) { mark[c] = v; list.push(c); }
+    }
+    lists[v] = list;
+  }
+  return lists;
+}
+
+export function minimumDegreeOrder(pattern: CscPattern): Int32Array {
+  const n = pattern.n;
+  const adjacency = symmetricNeighbours(pattern);
 
   // Degree buckets as doubly linked lists so picking the minimum is cheap.
-  const head = new Int32Array(n + 1).fill(-1);
-  const next = new Int32Array(n).fill(-1);
-  const prev = new Int32Array(n).fill(-1);
-  const degree = new Int32Array(n);
+  const [head, next, prev, degree, mark, order] = int32Views([n + 1, n, n, n, n, n] as const);
+  head.fill(-1);
+  next.fill(-1);
+  prev.fill(-1);
   const insert = (v: number, d: number): void => {
     degree[v] = d;
     prev[v] = -1;
-    const h = head[d] ?? -1;
+    const h = head[d] as number;
     next[v] = h;
     if (h >= 0) prev[h] = v;
     head[d] = v;
   };
   const remove = (v: number): void => {
-    const d = degree[v] ?? 0;
-    const p = prev[v] ?? -1;
-    const nx = next[v] ?? -1;
+    const d = degree[v] as number;
+    const p = prev[v] as number;
+    const nx = next[v] as number;
     if (p >= 0) next[p] = nx;
     else head[d] = nx;
     if (nx >= 0) prev[nx] = p;
   };
-  for (let v = n - 1; v >= 0; v--) insert(v, Math.min(n, adjacency[v]?.size ?? 0));
+  for (let v = n - 1; v >= 0; v--) insert(v, Math.min(n, (adjacency[v] as number[]).length));
 
-  const order = new Int32Array(n);
+  let stamp = 0;
   let minDegree = 0;
   for (let step = 0; step < n; step++) {
-    while (minDegree <= n && (head[minDegree] ?? -1) < 0) minDegree++;
-    const v = head[minDegree] ?? -1;
+    while (minDegree <= n && (head[minDegree] as number) < 0) minDegree++;
+    const v = minDegree <= n ? (head[minDegree] as number) : -1;
     if (v < 0) throw new Error("minimumDegreeOrder: bucket structure corrupted");
     remove(v);
     order[step] = v;
-    const neighbours = [...(adjacency[v] ?? [])];
-    adjacency[v] = new Set<number>();
-    for (const u of neighbours) adjacency[u]?.delete(v);
+    const neighbours = adjacency[v] as number[];
+    adjacency[v] = [];
+    for (const u of neighbours) {
+      const list = adjacency[u] as number[];
+      const at = list.indexOf(v);
+      if (at >= 0) list.splice(at, 1);
+    }
     // Eliminating v joins its neighbours into a clique (the fill the LU will create).
     for (let a = 0; a < neighbours.length; a++) {
-      const u = neighbours[a] ?? 0;
-      const setU = adjacency[u];
-      if (!setU) continue;
+      const u = neighbours[a] as number;
+      const listU = adjacency[u] as number[];
+      stamp++;
+      for (const x of listU) mark[x] = stamp;
       for (let b = a + 1; b < neighbours.length; b++) {
-        const w = neighbours[b] ?? 0;
-        if (!setU.has(w)) {
-          setU.add(w);
-          adjacency[w]?.add(u);
+        const w = neighbours[b] as number;
+        if (mark[w] !== stamp) {
+          mark[w] = stamp;
+          listU.push(w);
+          (adjacency[w] as number[]).push(u);
         }
       }
     }
     for (const u of neighbours) {
       remove(u);
-      const d = Math.min(n, adjacency[u]?.size ?? 0);
+      const d = Math.min(n, (adjacency[u] as number[]).length);
       insert(u, d);
       if (d < minDegree) minDegree = d;
     }

@@ -4,19 +4,26 @@
 // fill-reducing order; within a column the diagonal is preferred as pivot when it is within
 // `pivotTolerance` of the largest candidate, which keeps that order's sparsity while still
 // pivoting away from the zero diagonals that voltage-source branch rows put into an MNA matrix.
-// A real and a complex variant share the symbolic machinery; values are kept in split
-// re/im arrays so the complex path allocates nothing per operation.
+// The real variant lives here with the symbolic machinery it shares with the complex one
+// (complex-lu.ts).
+//
+// Re-factorising a matrix with the same pattern and pivots (every Newton iteration, every AC
+// frequency) runs from a plan compiled once per pivot order: for each column update the L
+// column to apply and, per entry, the position in the factor array it lands on. The numeric
+// pass then works in place on the factors — no scatter into a dense work vector, no gather back,
+// no per-column clearing — and performs the same operations in the same order as the
+// left-looking factorisation, so its results are bit-for-bit the same.
 
 import type { CscPattern } from "./ordering.js";
+import { float64Views, int32Views, type Arena } from "./views.js";
 
 export type FactorOutcome = { ok: true } | { ok: false; singularColumn: number };
 
 /** Candidate pivots smaller than this fraction of the column's largest original entry count as zero. */
-const SINGULAR_RELATIVE = 1e-14;
+export const SINGULAR_RELATIVE = 1e-14;
 
-class GrowableIndex {
-  data: Int32Array;
-  constructor(capacity: number) { this.data = new Int32Array(Math.max(16, capacity)); }
+export class GrowableIndex {
+  constructor(public data: Int32Array) {}
   ensure(size: number): void {
     if (size <= this.data.length) return;
     let cap = this.data.length;
@@ -27,9 +34,8 @@ class GrowableIndex {
   }
 }
 
-class GrowableValues {
-  data: Float64Array;
-  constructor(capacity: number) { this.data = new Float64Array(Math.max(16, capacity)); }
+export class GrowableValues {
+  constructor(public data: Float64Array) {}
   ensure(size: number): void {
     if (size <= this.data.length) return;
     let cap = this.data.length;
@@ -41,7 +47,7 @@ class GrowableValues {
 }
 
 /** Pattern bookkeeping shared by the real and complex factorisations. */
-abstract class SparseLuBase {
+export abstract class SparseLuBase {
   readonly n: number;
   protected readonly Lp: Int32Array;
   protected readonly Up: Int32Array;
@@ -55,17 +61,24 @@ abstract class SparseLuBase {
   protected readonly mark: Int32Array;
   protected markStamp = 0;
 
-  constructor(n: number, capacityHint: number) {
+  /** Where a real factorisation inside a solve takes its arrays from (see Arena). */
+  protected readonly arena: Arena | undefined;
+
+  constructor(n: number, capacity: number, arena?: Arena) {
     this.n = n;
-    this.Lp = new Int32Array(n + 1);
-    this.Up = new Int32Array(n + 1);
-    this.Li = new GrowableIndex(capacityHint);
-    this.Ui = new GrowableIndex(capacityHint);
-    this.pinv = new Int32Array(n);
-    this.order = new Int32Array(n);
-    this.xi = new Int32Array(n);
-    this.pstack = new Int32Array(n);
-    this.mark = new Int32Array(n);
+    this.arena = arena;
+    const [Lp, Up, pinv, order, xi, pstack, mark, Li, Ui] = arena
+      ? [arena.i32(n + 1), arena.i32(n + 1), arena.i32(n), arena.i32(n), arena.i32(n), arena.i32(n), arena.i32(n), arena.i32(capacity), arena.i32(capacity)]
+      : int32Views([n + 1, n + 1, n, n, n, n, n, capacity, capacity] as const);
+    this.Lp = Lp;
+    this.Up = Up;
+    this.pinv = pinv;
+    this.order = order;
+    this.xi = xi;
+    this.pstack = pstack;
+    this.mark = mark;
+    this.Li = new GrowableIndex(Li);
+    this.Ui = new GrowableIndex(Ui);
   }
 
   /** Rows reachable from the pattern of A(:,col) through the columns of L built so far, topologically sorted into xi[top..n). */
@@ -116,21 +129,113 @@ abstract class SparseLuBase {
     const lnz = this.Lp[this.n] as number;
     const Li = this.Li.data, pinv = this.pinv;
     for (let p = 0; p < lnz; p++) Li[p] = pinv[Li[p] as number] as number;
+    this.plan = null;
+  }
+
+  /**
+   * Factor values live in one array per part: U's entries (column by column, diagonal last) at
+   * [0, unz), L's entries at unz + their L position. A column update can then name its target
+   * with one index whether it lands in U, on the diagonal or in L.
+   */
+  protected plan: RefactorPlan | null = null;
+
+  /** The refactorisation plan for the current pivot order, compiled on first use. */
+  protected planFor(pattern: CscPattern): RefactorPlan {
+    if (this.plan) return this.plan;
+    const n = this.n;
+    const Lp = this.Lp, Li = this.Li.data, Up = this.Up, Ui = this.Ui.data, pinv = this.pinv, order = this.order;
+    const unz = Up[n] as number;
+    // Sizes first: one group per U entry whose L column has entries below the diagonal.
+    let groups = 0, count = 0;
+    for (let k = 0; k < n; k++) {
+      const uEnd = (Up[k + 1] as number) - 1;
+      for (let p = Up[k] as number; p < uEnd; p++) {
+        const j = Ui[p] as number;
+        const below = (Lp[j + 1] as number) - (Lp[j] as number) - 1;
+        if (below > 0) { groups++; count += below; }
+      }
+    }
+    const lengths = [n + 1, groups, groups, groups + 1, count, pattern.colPtr[n] as number, n] as const;
+    const arena = this.arena;
+    const [columnGroups, multiplier, lFirst, groupTargets, targets, cscToFactor, positionOf] = arena
+      ? [arena.i32(lengths[0]), arena.i32(lengths[1]), arena.i32(lengths[2]), arena.i32(lengths[3]), arena.i32(lengths[4]), arena.i32(lengths[5]), arena.i32(lengths[6])]
+      : int32Views(lengths);
+    let g = 0, t = 0;
+    for (let k = 0; k < n; k++) {
+      columnGroups[k] = g;
+      const uStart = Up[k] as number, uEnd = Up[k + 1] as number;
+      for (let p = uStart; p < uEnd; p++) positionOf[Ui[p] as number] = p;
+      const lEnd = Lp[k + 1] as number;
+      for (let q = (Lp[k] as number) + 1; q < lEnd; q++) positionOf[Li[q] as number] = unz + q;
+      for (let p = uStart; p < uEnd - 1; p++) {
+        const j = Ui[p] as number;
+        const start = (Lp[j] as number) + 1, end = Lp[j + 1] as number;
+        if (start >= end) continue;
+        multiplier[g] = p;
+        lFirst[g] = unz + start;
+        groupTargets[g] = t;
+        for (let q = start; q < end; q++) targets[t++] = positionOf[Li[q] as number] as number;
+        g++;
+      }
+      const col = order[k] as number;
+      const aEnd = pattern.colPtr[col + 1] as number;
+      for (let p = pattern.colPtr[col] as number; p < aEnd; p++) {
+        cscToFactor[p] = positionOf[pinv[pattern.rowIdx[p] as number] as number] as number;
+      }
+    }
+    columnGroups[n] = g;
+    groupTargets[g] = t;
+    this.plan = { size: unz + (Lp[n] as number), unz, columnGroups, multiplier, lFirst, groupTargets, targets, cscToFactor };
+    return this.plan;
+  }
+
+  /** Where each entry of the CSC value array goes in the factor arrays (valid until the next factor()). */
+  factorPositions(pattern: CscPattern): Int32Array {
+    return this.planFor(pattern).cscToFactor;
   }
 }
 
+/**
+ * See SparseLuBase.planFor. Column k's updates are the groups columnGroups[k] ..
+ * columnGroups[k + 1]; group g multiplies the L column starting at factor position lFirst[g] by
+ * the finished U entry at multiplier[g] and subtracts it at targets[groupTargets[g] ..
+ * groupTargets[g + 1]). U entries whose L column is only the unit diagonal have no group.
+ */
+export interface RefactorPlan {
+  size: number;
+  unz: number;
+  columnGroups: Int32Array;
+  multiplier: Int32Array;
+  lFirst: Int32Array;
+  groupTargets: Int32Array;
+  targets: Int32Array;
+  cscToFactor: Int32Array;
+}
+
 export class RealSparseLu extends SparseLuBase {
+  /** factor()'s work space, grown column by column. */
   private readonly Lx: GrowableValues;
   private readonly Ux: GrowableValues;
+  /** The factors in the layout of SparseLuBase.plan: U at [0, unz), L at unz + L position. */
+  private F = new Float64Array(0);
   private readonly x: Float64Array;
   private readonly y: Float64Array;
 
-  constructor(n: number, capacityHint = 4 * n) {
-    super(n, capacityHint);
-    this.Lx = new GrowableValues(capacityHint);
-    this.Ux = new GrowableValues(capacityHint);
-    this.x = new Float64Array(n);
-    this.y = new Float64Array(n);
+  constructor(n: number, arena?: Arena, capacityHint = 4 * n) {
+    const capacity = Math.max(16, capacityHint);
+    super(n, capacity, arena);
+    const [Lx, Ux, x, y] = arena
+      ? [arena.f64(capacity), arena.f64(capacity), arena.f64(n), arena.f64(n)]
+      : float64Views([capacity, capacity, n, n] as const);
+    this.Lx = new GrowableValues(Lx);
+    this.Ux = new GrowableValues(Ux);
+    this.x = x;
+    this.y = y;
+  }
+
+  private factorArray(size: number): Float64Array {
+    if (this.F.length < size) this.F = this.arena ? this.arena.f64(size) : new Float64Array(size);
+    return this.F;
   }
 
   factor(pattern: CscPattern, values: Float64Array, order: Int32Array, pivotTolerance: number): FactorOutcome {
@@ -202,53 +307,61 @@ export class RealSparseLu extends SparseLuBase {
     Lp[n] = lnz;
     Up[n] = unz;
     this.finishPattern();
+    const F = this.factorArray(unz + lnz);
+    F.set(this.Ux.data.subarray(0, unz), 0);
+    F.set(this.Lx.data.subarray(0, lnz), unz);
     return { ok: true };
   }
 
   /**
-   * Numeric-only factorisation of a matrix with the same pattern, re-using the previous pivot
-   * order and L/U structure (no search, no depth-first reach). Returns false — and leaves the
-   * factors unusable — when a re-used pivot has become too small against its column, so the
-   * caller must fall back to factor().
+   * Numeric-only factorisation of a matrix with the same pattern, re-using the pivot order and
+   * L/U structure of the last factor(). `values[i]` is the matrix entry that belongs at factor
+   * position `positions[i]` (see factorPositions). Returns false — and leaves the factors
+   * unusable — when a re-used pivot has become too small against its column, so the caller must
+   * fall back to factor().
    */
-  refactor(pattern: CscPattern, values: Float64Array, pivotTolerance: number): boolean {
-    const n = this.n;
-    const { colPtr, rowIdx } = pattern;
-    const pinv = this.pinv, x = this.x, order = this.order;
-    const Lp = this.Lp, Li = this.Li.data, Lx = this.Lx.data, Up = this.Up, Ui = this.Ui.data, Ux = this.Ux.data;
+  refactor(pattern: CscPattern, values: Float64Array, count: number, positions: Int32Array, pivotTolerance: number): boolean {
+    const plan = this.planFor(pattern);
+    const F = this.F;
+    F.fill(0, 0, plan.size);
+    for (let i = 0; i < count; i++) F[positions[i] as number] = values[i] as number;
+    return this.eliminate(plan, pivotTolerance);
+  }
+
+  /** The in-place column updates of the plan, in the left-looking factorisation's order. */
+  private eliminate(plan: RefactorPlan, pivotTolerance: number): boolean {
+    const n = this.n, F = this.F, Lp = this.Lp, Up = this.Up;
+    const { unz, columnGroups, multiplier, lFirst, groupTargets, targets } = plan;
+    let g = 0;
     for (let k = 0; k < n; k++) {
-      const uStart = Up[k] as number, uEnd = Up[k + 1] as number;
-      const lStart = Lp[k] as number, lEnd = Lp[k + 1] as number;
-      for (let p = uStart; p < uEnd; p++) x[Ui[p] as number] = 0;
-      for (let p = lStart + 1; p < lEnd; p++) x[Li[p] as number] = 0;
-      const col = order[k] as number;
-      const aEnd = colPtr[col + 1] as number;
-      for (let p = colPtr[col] as number; p < aEnd; p++) x[pinv[rowIdx[p] as number] as number] = values[p] as number;
-      for (let p = uStart; p < uEnd - 1; p++) {
-        const j = Ui[p] as number;
-        const xj = x[j] as number;
-        Ux[p] = xj;
+      const gEnd = columnGroups[k + 1] as number;
+      for (; g < gEnd; g++) {
+        const xj = F[multiplier[g] as number] as number;
         if (xj === 0) continue;
-        const end = Lp[j + 1] as number;
-        for (let q = (Lp[j] as number) + 1; q < end; q++) {
-          const i = Li[q] as number;
-          x[i] = (x[i] as number) - (Lx[q] as number) * xj;
+        const end = groupTargets[g + 1] as number;
+        for (let t = groupTargets[g] as number, q = lFirst[g] as number; t < end; t++, q++) {
+          const i = targets[t] as number;
+          F[i] = (F[i] as number) - (F[q] as number) * xj;
         }
       }
-      const pivot = x[k] as number;
-      Ux[uEnd - 1] = pivot;
+      const pivot = F[(Up[k + 1] as number) - 1] as number;
+      const lStart = unz + (Lp[k] as number) + 1, lEnd = unz + (Lp[k + 1] as number);
       let largest = 0;
-      for (let p = lStart + 1; p < lEnd; p++) largest = Math.max(largest, Math.abs(x[Li[p] as number] as number));
+      for (let q = lStart; q < lEnd; q++) {
+        const v = F[q] as number;
+        largest = Math.max(largest, Math.abs(v));
+        F[q] = v / pivot;
+      }
       if (!(Math.abs(pivot) > 0) || Math.abs(pivot) < pivotTolerance * largest) return false;
-      for (let p = lStart + 1; p < lEnd; p++) Lx[p] = (x[Li[p] as number] as number) / pivot;
     }
     return true;
   }
 
   /** Solves A·out = b with the last successful factorisation. */
   solve(b: Float64Array, out: Float64Array): void {
-    const n = this.n, pinv = this.pinv, y = this.y, order = this.order;
-    const Lp = this.Lp, Li = this.Li.data, Lx = this.Lx.data, Up = this.Up, Ui = this.Ui.data, Ux = this.Ux.data;
+    const n = this.n, pinv = this.pinv, y = this.y, order = this.order, F = this.F;
+    const Lp = this.Lp, Li = this.Li.data, Up = this.Up, Ui = this.Ui.data;
+    const unz = Up[n] as number;
     for (let i = 0; i < n; i++) y[pinv[i] as number] = b[i] as number;
     for (let j = 0; j < n; j++) {
       const yj = y[j] as number;
@@ -256,232 +369,19 @@ export class RealSparseLu extends SparseLuBase {
       const end = Lp[j + 1] as number;
       for (let p = (Lp[j] as number) + 1; p < end; p++) {
         const i = Li[p] as number;
-        y[i] = (y[i] as number) - (Lx[p] as number) * yj;
+        y[i] = (y[i] as number) - (F[unz + p] as number) * yj;
       }
     }
     for (let j = n - 1; j >= 0; j--) {
       const last = (Up[j + 1] as number) - 1;
-      const yj = (y[j] as number) / (Ux[last] as number);
+      const yj = (y[j] as number) / (F[last] as number);
       y[j] = yj;
       if (yj === 0) continue;
       for (let p = Up[j] as number; p < last; p++) {
         const i = Ui[p] as number;
-        y[i] = (y[i] as number) - (Ux[p] as number) * yj;
+        y[i] = (y[i] as number) - (F[p] as number) * yj;
       }
     }
     for (let k = 0; k < n; k++) out[order[k] as number] = y[k] as number;
-  }
-
-}
-
-export class ComplexSparseLu extends SparseLuBase {
-  private readonly Lr: GrowableValues;
-  private readonly Lm: GrowableValues;
-  private readonly Ur: GrowableValues;
-  private readonly Um: GrowableValues;
-  private readonly xr: Float64Array;
-  private readonly xm: Float64Array;
-  private readonly yr: Float64Array;
-  private readonly ym: Float64Array;
-
-  constructor(n: number, capacityHint = 4 * n) {
-    super(n, capacityHint);
-    this.Lr = new GrowableValues(capacityHint);
-    this.Lm = new GrowableValues(capacityHint);
-    this.Ur = new GrowableValues(capacityHint);
-    this.Um = new GrowableValues(capacityHint);
-    this.xr = new Float64Array(n);
-    this.xm = new Float64Array(n);
-    this.yr = new Float64Array(n);
-    this.ym = new Float64Array(n);
-  }
-
-  factor(pattern: CscPattern, re: Float64Array, im: Float64Array, order: Int32Array, pivotTolerance: number): FactorOutcome {
-    const n = this.n;
-    const { colPtr, rowIdx } = pattern;
-    const pinv = this.pinv, xr = this.xr, xm = this.xm, xi = this.xi, Lp = this.Lp, Up = this.Up;
-    this.order = order;
-    pinv.fill(-1);
-    const tol2 = pivotTolerance * pivotTolerance;
-    let lnz = 0, unz = 0;
-    for (let k = 0; k < n; k++) {
-      Lp[k] = lnz;
-      Up[k] = unz;
-      this.Li.ensure(lnz + n); this.Lr.ensure(lnz + n); this.Lm.ensure(lnz + n);
-      this.Ui.ensure(unz + n); this.Ur.ensure(unz + n); this.Um.ensure(unz + n);
-      const Li = this.Li.data, Lr = this.Lr.data, Lm = this.Lm.data;
-      const Ui = this.Ui.data, Ur = this.Ur.data, Um = this.Um.data;
-      const col = order[k] as number;
-      const top = this.reach(pattern, col);
-      for (let p = top; p < n; p++) { const i = xi[p] as number; xr[i] = 0; xm[i] = 0; }
-      let colMax2 = 0;
-      const aEnd = colPtr[col + 1] as number;
-      for (let p = colPtr[col] as number; p < aEnd; p++) {
-        const i = rowIdx[p] as number;
-        const vr = re[p] as number, vm = im[p] as number;
-        xr[i] = vr; xm[i] = vm;
-        const m2 = vr * vr + vm * vm;
-        if (m2 > colMax2) colMax2 = m2;
-      }
-      for (let px = top; px < n; px++) {
-        const j = xi[px] as number;
-        const J = pinv[j] as number;
-        if (J < 0) continue;
-        const ar = xr[j] as number, am = xm[j] as number;
-        if (ar === 0 && am === 0) continue;
-        const end = Lp[J + 1] as number;
-        for (let p = (Lp[J] as number) + 1; p < end; p++) {
-          const i = Li[p] as number;
-          const lr = Lr[p] as number, lm = Lm[p] as number;
-          xr[i] = (xr[i] as number) - (lr * ar - lm * am);
-          xm[i] = (xm[i] as number) - (lr * am + lm * ar);
-        }
-      }
-      let ipiv = -1, best2 = -1;
-      for (let p = top; p < n; p++) {
-        const i = xi[p] as number;
-        if ((pinv[i] as number) < 0) {
-          const vr = xr[i] as number, vm = xm[i] as number;
-          const t = vr * vr + vm * vm;
-          if (t > best2) { best2 = t; ipiv = i; }
-        } else {
-          Ui[unz] = pinv[i] as number;
-          Ur[unz] = xr[i] as number;
-          Um[unz++] = xm[i] as number;
-        }
-      }
-      const rel2 = SINGULAR_RELATIVE * SINGULAR_RELATIVE;
-      if (ipiv < 0 || !(best2 > rel2 * colMax2) || best2 === 0) return { ok: false, singularColumn: col };
-      if ((pinv[col] as number) < 0) {
-        const dr = xr[col] as number, dm = xm[col] as number;
-        if (dr * dr + dm * dm >= best2 * tol2) ipiv = col;
-      }
-      const pr = xr[ipiv] as number, pm = xm[ipiv] as number;
-      const pmag2 = pr * pr + pm * pm;
-      // 1/pivot = conj(pivot)/|pivot|²
-      const invR = pr / pmag2, invM = -pm / pmag2;
-      Ui[unz] = k;
-      Ur[unz] = pr;
-      Um[unz++] = pm;
-      pinv[ipiv] = k;
-      Li[lnz] = ipiv;
-      Lr[lnz] = 1;
-      Lm[lnz++] = 0;
-      for (let p = top; p < n; p++) {
-        const i = xi[p] as number;
-        if ((pinv[i] as number) < 0) {
-          const vr = xr[i] as number, vm = xm[i] as number;
-          Li[lnz] = i;
-          Lr[lnz] = vr * invR - vm * invM;
-          Lm[lnz++] = vr * invM + vm * invR;
-        }
-        xr[i] = 0;
-        xm[i] = 0;
-      }
-    }
-    Lp[n] = lnz;
-    Up[n] = unz;
-    this.finishPattern();
-    return { ok: true };
-  }
-
-  /** Complex counterpart of RealSparseLu.refactor. */
-  refactor(pattern: CscPattern, re: Float64Array, im: Float64Array, pivotTolerance: number): boolean {
-    const n = this.n;
-    const { colPtr, rowIdx } = pattern;
-    const pinv = this.pinv, xr = this.xr, xm = this.xm, order = this.order;
-    const Lp = this.Lp, Li = this.Li.data, Lr = this.Lr.data, Lm = this.Lm.data;
-    const Up = this.Up, Ui = this.Ui.data, Ur = this.Ur.data, Um = this.Um.data;
-    const tol2 = pivotTolerance * pivotTolerance;
-    for (let k = 0; k < n; k++) {
-      const uStart = Up[k] as number, uEnd = Up[k + 1] as number;
-      const lStart = Lp[k] as number, lEnd = Lp[k + 1] as number;
-      for (let p = uStart; p < uEnd; p++) { const i = Ui[p] as number; xr[i] = 0; xm[i] = 0; }
-      for (let p = lStart + 1; p < lEnd; p++) { const i = Li[p] as number; xr[i] = 0; xm[i] = 0; }
-      const col = order[k] as number;
-      const aEnd = colPtr[col + 1] as number;
-      for (let p = colPtr[col] as number; p < aEnd; p++) {
-        const i = pinv[rowIdx[p] as number] as number;
-        xr[i] = re[p] as number;
-        xm[i] = im[p] as number;
-      }
-      for (let p = uStart; p < uEnd - 1; p++) {
-        const j = Ui[p] as number;
-        const ar = xr[j] as number, am = xm[j] as number;
-        Ur[p] = ar;
-        Um[p] = am;
-        if (ar === 0 && am === 0) continue;
-        const end = Lp[j + 1] as number;
-        for (let q = (Lp[j] as number) + 1; q < end; q++) {
-          const i = Li[q] as number;
-          const lr = Lr[q] as number, lm = Lm[q] as number;
-          xr[i] = (xr[i] as number) - (lr * ar - lm * am);
-          xm[i] = (xm[i] as number) - (lr * am + lm * ar);
-        }
-      }
-      const pr = xr[k] as number, pm = xm[k] as number;
-      Ur[uEnd - 1] = pr;
-      Um[uEnd - 1] = pm;
-      const pmag2 = pr * pr + pm * pm;
-      let largest2 = 0;
-      for (let p = lStart + 1; p < lEnd; p++) {
-        const i = Li[p] as number;
-        const vr = xr[i] as number, vm = xm[i] as number;
-        largest2 = Math.max(largest2, vr * vr + vm * vm);
-      }
-      if (!(pmag2 > 0) || pmag2 < tol2 * largest2) return false;
-      const invR = pr / pmag2, invM = -pm / pmag2;
-      for (let p = lStart + 1; p < lEnd; p++) {
-        const i = Li[p] as number;
-        const vr = xr[i] as number, vm = xm[i] as number;
-        Lr[p] = vr * invR - vm * invM;
-        Lm[p] = vr * invM + vm * invR;
-      }
-    }
-    return true;
-  }
-
-  solve(bRe: Float64Array, bIm: Float64Array, outRe: Float64Array, outIm: Float64Array): void {
-    const n = this.n, pinv = this.pinv, yr = this.yr, ym = this.ym, order = this.order;
-    const Lp = this.Lp, Li = this.Li.data, Lr = this.Lr.data, Lm = this.Lm.data;
-    const Up = this.Up, Ui = this.Ui.data, Ur = this.Ur.data, Um = this.Um.data;
-    for (let i = 0; i < n; i++) {
-      const k = pinv[i] as number;
-      yr[k] = bRe[i] as number;
-      ym[k] = bIm[i] as number;
-    }
-    for (let j = 0; j < n; j++) {
-      const ar = yr[j] as number, am = ym[j] as number;
-      if (ar === 0 && am === 0) continue;
-      const end = Lp[j + 1] as number;
-      for (let p = (Lp[j] as number) + 1; p < end; p++) {
-        const i = Li[p] as number;
-        const lr = Lr[p] as number, lm = Lm[p] as number;
-        yr[i] = (yr[i] as number) - (lr * ar - lm * am);
-        ym[i] = (ym[i] as number) - (lr * am + lm * ar);
-      }
-    }
-    for (let j = n - 1; j >= 0; j--) {
-      const last = (Up[j + 1] as number) - 1;
-      const dr = Ur[last] as number, dm = Um[last] as number;
-      const d2 = dr * dr + dm * dm;
-      const vr = yr[j] as number, vm = ym[j] as number;
-      const ar = (vr * dr + vm * dm) / d2;
-      const am = (vm * dr - vr * dm) / d2;
-      yr[j] = ar;
-      ym[j] = am;
-      if (ar === 0 && am === 0) continue;
-      for (let p = Up[j] as number; p < last; p++) {
-        const i = Ui[p] as number;
-        const ur = Ur[p] as number, um = Um[p] as number;
-        yr[i] = (yr[i] as number) - (ur * ar - um * am);
-        ym[i] = (ym[i] as number) - (ur * am + um * ar);
-      }
-    }
-    for (let k = 0; k < n; k++) {
-      const o = order[k] as number;
-      outRe[o] = yr[k] as number;
-      outIm[o] = ym[k] as number;
-    }
   }
 }

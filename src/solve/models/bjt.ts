@@ -6,7 +6,7 @@
 // Not modelled: the current dependence of RB (IRB/RBM), excess phase (PTF), substrate junction
 // (CJS), quasi-saturation; temperature is 27 °C = TNOM so XTI/EG/XTB have no effect.
 
-import { currentSettled, type DcLoadContext, type Device } from "../device.js";
+import { currentSettled, type DcLoadContext, type Device, type ElaborationMemo } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { BjtElement } from "../netlist.js";
 import { voltageOf, type ComplexStamp, type RealStamp, type Unknown } from "../stamp.js";
@@ -131,6 +131,8 @@ export function bjtConstants(el: BjtElement): BjtConstants {
 interface BjtState {
   vbe: number;
   vbc: number;
+  /** External base to internal collector, for the part of CJC outside RB. */
+  vbx: number;
   cc: number;
   cb: number;
   gpi: number;
@@ -238,8 +240,8 @@ function region(s: BjtState, area: number): BjtRegion {
   return "cut-off";
 }
 
-export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
-  const k = bjtConstants(el);
+export function bjtDevice(el: BjtElement, unknowns: UnknownMap, memo?: ElaborationMemo): Device {
+  const k = memo ? memo.derived(BJT_PARAMS, el.model, el.area ?? 1, () => bjtConstants(el)) : bjtConstants(el);
   const c = unknowns.node(el.c);
   const b = unknowns.node(el.b);
   const e = unknowns.node(el.e);
@@ -249,10 +251,9 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
   const t = k.polarity;
   const scratch: CurrentAndSlope = { i: 0, g: 0 };
   const s: BjtState = {
-    vbe: 0, vbc: 0, cc: 0, cb: 0, gpi: 0, gmu: 0, gm: 0, go: 0,
+    vbe: 0, vbc: 0, vbx: 0, cc: 0, cb: 0, gpi: 0, gmu: 0, gm: 0, go: 0,
     cbeIdeal: 0, gbeIdeal: 0, cbcIdeal: 0, gbcIdeal: 0, qb: 1, dqbdve: 0, dqbdvc: 0,
   };
-  let vbx = 0;
   // Capacitances depend only on the operating point: computed once per AC sweep, not per frequency.
   let caps: BjtCapacitances | null = null;
 
@@ -285,7 +286,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
           vbc = pnjlim(vbc, s.vbc, THERMAL_VOLTAGE, k.vcrit, ctx);
         }
       }
-      vbx = t * (voltageOf(x, b) - voltageOf(x, cp));
+      s.vbx = t * (voltageOf(x, b) - voltageOf(x, cp));
       evaluate(k, vbe, vbc, ctx.gmin, s, scratch);
       caps = null;
       stampOhmic(stamp);
@@ -309,7 +310,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
     },
     loadAc(stamp, ctx) {
       const w = ctx.omega;
-      const cap = (caps ??= capacitances(k, s, vbx));
+      const cap = (caps ??= capacitances(k, s, s.vbx));
       stampOhmicAc(stamp);
       stamp.transadmittance(cp, ep, bp, ep, s.gm + s.go, 0);
       stamp.transadmittance(cp, ep, bp, cp, -(s.go + s.gmu), 0);
@@ -325,7 +326,7 @@ export function bjtDevice(el: BjtElement, unknowns: UnknownMap): Device {
       const vc = voltageOf(x, c), vb = voltageOf(x, b), ve = voltageOf(x, e);
       const icIn = t * s.cc;
       const ibIn = t * s.cb;
-      const cap = (caps ??= capacitances(k, s, vbx));
+      const cap = (caps ??= capacitances(k, s, s.vbx));
       return {
         kind: "bjt",
         type: t === 1 ? "npn" : "pnp",

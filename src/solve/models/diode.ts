@@ -3,7 +3,7 @@
 // capacitance TT·gd. Breakdown voltage is adjusted at set-up so the current at −BV is IBV, as
 // SPICE does.
 
-import { currentSettled, type DcLoadContext, type Device } from "../device.js";
+import { currentSettled, type DcLoadContext, type Device, type ElaborationMemo } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { DiodeElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -96,8 +96,8 @@ function diodeCurrent(vd: number, k: DiodeConstants, out: CurrentAndSlope): Curr
   return out;
 }
 
-export function diodeDevice(el: DiodeElement, unknowns: UnknownMap): Device {
-  const k = diodeConstants(el);
+export function diodeDevice(el: DiodeElement, unknowns: UnknownMap, memo?: ElaborationMemo): Device {
+  const k = memo ? memo.derived(DIODE_PARAMS, el.model, el.area ?? 1, () => diodeConstants(el)) : diodeConstants(el);
   const anode = unknowns.node(el.anode);
   const cathode = unknowns.node(el.cathode);
   const junctionAnode: Unknown = k.gs > 0 ? unknowns.internalNode(el.name, "anode") : anode;

@@ -7,7 +7,7 @@
 // N and M are honoured as cards written for other SPICE dialects use them; ngspice's level-1 JFET has neither
 // (ideal gate diodes, grading fixed at 0.5), so they match ngspice when left at their defaults.
 
-import { currentSettled, type Device } from "../device.js";
+import { currentSettled, type Device, type ElaborationMemo } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { JfetElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -142,8 +142,8 @@ function jfetRegion(k: JfetConstants, vgs: number, vgd: number): FetRegion {
   return vgst <= Math.abs(vds) ? "saturation" : "triode";
 }
 
-export function jfetDevice(el: JfetElement, unknowns: UnknownMap): Device {
-  const k = jfetConstants(el);
+export function jfetDevice(el: JfetElement, unknowns: UnknownMap, memo?: ElaborationMemo): Device {
+  const k = memo ? memo.derived(JFET_PARAMS, el.model, el.area ?? 1, () => jfetConstants(el)) : jfetConstants(el);
   const d = unknowns.node(el.d);
   const g = unknowns.node(el.g);
   const src = unknowns.node(el.s);

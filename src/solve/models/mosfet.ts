@@ -7,7 +7,7 @@
 // perimeter junction capacitances (CJ, CJSW need AD/AS/PD/PS), RSH, process-derived parameters
 // (KP from UO/TOX, VTO from NSUB), temperature coefficients.
 
-import { currentSettled, type Device } from "../device.js";
+import { currentSettled, type Device, type ElaborationMemo } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type { MosfetElement } from "../netlist.js";
 import { voltageOf, type Unknown } from "../stamp.js";
@@ -202,8 +202,8 @@ function mosRegion(s: MosState): FetRegion {
   return vgst <= s.vds * s.mode ? "saturation" : "triode";
 }
 
-export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap): Device {
-  const k = mosfetConstants(el);
+export function mosfetDevice(el: MosfetElement, unknowns: UnknownMap, memo?: ElaborationMemo): Device {
+  const k = memo ? memo.derived(MOSFET_PARAMS, el.model, `${el.w ?? DEFAULT_CHANNEL_SIZE}:${el.l ?? DEFAULT_CHANNEL_SIZE}`, () => mosfetConstants(el)) : mosfetConstants(el);
   const d = unknowns.node(el.d);
   const g = unknowns.node(el.g);
   const src = unknowns.node(el.s);
