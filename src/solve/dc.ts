@@ -6,8 +6,8 @@
 
 import { TOLERANCES, type DcLoadContext, type DcMode, type Device } from "./device.js";
 import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
-import { RealSystem, type PatternSnapshot, type Unknown } from "./mna.js";
-import { preparedCircuit } from "./prepared.js";
+import { RealSystem, type FactorStructure, type PatternSnapshot, type Unknown } from "./mna.js";
+import { preparedCircuit, type PreparedCircuit } from "./prepared.js";
 import type { SolverCircuit } from "./netlist.js";
 import { RealStamper } from "./stamp.js";
 import type { DeviceOperatingPoint, OperatingPoint, SolveMethod } from "./types.js";
@@ -72,9 +72,10 @@ class DcSolver {
     readonly maxIterations: number,
     readonly deadline: number,
     pattern: PatternSnapshot | null,
+    factors: FactorStructure | null,
   ) {
     const n = elaborated.unknowns.size;
-    this.system = new RealSystem(n, pattern ?? undefined, 3 * n);
+    this.system = new RealSystem(n, pattern ?? undefined, 3 * n, factors);
     this.stamp = new RealStamper(this.system);
     const arena = this.system.arena;
     this.x = arena.f64(n);
@@ -361,9 +362,21 @@ export function solveOperatingPoint(circuit: SolverCircuit, opts: DcOptions = {}
   const maxIterations = Math.max(1, Math.floor(opts.maxIterations ?? DEFAULT_MAX_ITERATIONS));
   const maxMillis = Math.max(0, opts.maxMillis ?? DEFAULT_MAX_MILLIS);
   const gmin = opts.gmin ?? DEFAULT_GMIN;
-  const solver = new DcSolver(elaborate(circuit, prepared.numbering), gmin, maxIterations, Date.now() + maxMillis, prepared.dcPattern);
+  const solver = new DcSolver(elaborate(circuit, prepared.numbering), gmin, maxIterations, Date.now() + maxMillis, prepared.dcPattern, prepared.dcFactors);
+  try {
+    return solveWith(solver, prepared);
+  } finally {
+    // The result holds copies only (collectResult), so the solver's arrays can serve the next solve.
+    solver.system.release();
+  }
+}
+
+function solveWith(solver: DcSolver, prepared: PreparedCircuit): OperatingPoint {
   const plain = plainNewton(solver);
-  prepared.dcPattern ??= solver.system.firstPattern;
+  if (!prepared.dcPattern) {
+    prepared.dcPattern = solver.system.firstPattern;
+    prepared.dcFactors = solver.system.firstFactors;
+  }
   if (plain.ok) return collectResult(solver, true, "newton");
   if (plain.failure?.reason === "singular") {
     return collectResult(solver, false, "newton", singularMessage(solver, plain.failure.unknown));

@@ -4,10 +4,11 @@
 
 import { ComplexSparseLu } from "./complex-lu.js";
 import { MatrixPattern, type PatternSnapshot } from "./pattern.js";
-import { RealSparseLu } from "./sparse-lu.js";
-import { Arena, float64Views } from "./views.js";
+import { RealSparseLu, type FactorStructure } from "./sparse-lu.js";
+import { acquireArena, float64Views, releaseArena, type Arena } from "./views.js";
 
 export type { PatternSnapshot } from "./pattern.js";
+export type { FactorStructure } from "./sparse-lu.js";
 
 /** Index of an unknown in the solution vector; the reference node has none. */
 export type Unknown = number;
@@ -136,13 +137,25 @@ export class RealSystem {
    */
   readonly arena: Arena;
 
-  /** `from`: the pattern of an earlier system over the same circuit (see firstPattern). */
-  constructor(n: number, from?: PatternSnapshot, extraDoubles = 0) {
+  /**
+   * The structure of this system's first factorisation (null before it, or when it came from
+   * `startFactors`), for the next system over the same circuit.
+   */
+  firstFactors: FactorStructure | null = null;
+  /** An earlier system's first factorisation, tried (and kept only if exact) before a pivot search. */
+  private startFactors: FactorStructure | null;
+
+  /**
+   * `from`: the pattern of an earlier system over the same circuit (see firstPattern), and
+   * `factors` the structure of its first factorisation (see firstFactors).
+   */
+  constructor(n: number, from?: PatternSnapshot, extraDoubles = 0, factors: FactorStructure | null = null) {
     this.n = n;
+    this.startFactors = from ? factors : null;
     this.pattern = new MatrixPattern(n, from);
     const slots = Math.max(6 * n + 16, this.pattern.slotCount);
     const entries = Math.max(16, 4 * n);
-    const arena = (this.arena = new Arena(4 * n + 4 * slots + 4 * entries + extraDoubles, 8 * n + 2 * slots + 5 * entries + 16));
+    const arena = (this.arena = acquireArena(4 * n + 4 * slots + 4 * entries + extraDoubles, 8 * n + 2 * slots + 5 * entries + 16));
     this.values = arena.f64(slots);
     this.rhs = arena.f64(n);
     this.baseRhs = arena.f64(n);
@@ -154,6 +167,14 @@ export class RealSystem {
    * system started from an earlier system's snapshot), for the next system over the same circuit.
    */
   firstPattern: PatternSnapshot | null = null;
+
+  /**
+   * Hands the arrays back for the next system (see releaseArena): the system, its LU and every
+   * vector taken from `arena` are unusable afterwards.
+   */
+  release(): void {
+    releaseArena(this.arena);
+  }
 
   /** Starts a new assembly: clears values and right-hand side. */
   begin(): void {
@@ -226,6 +247,19 @@ export class RealSystem {
       this.cscValues = this.arena.f64(count);
       this.factoredValues = this.arena.f64(count);
     }
+    const start = this.startFactors;
+    this.startFactors = null;
+    if (start && !this.factored && !symbolicChanged) {
+      const positions = this.lu.refactorAsFactor(start, pattern.csc, pattern.order, values, count, pattern.slotToCsc, PIVOT_TOLERANCE);
+      if (positions) {
+        this.slotPositions = positions;
+        this.factored = true;
+        this.factoredValues.set(values.subarray(0, count));
+        this.lu.solve(this.rhs, out);
+        return { ok: true };
+      }
+    }
+    const firstFactorisation = !this.factored && this.firstFactors === null && start === null;
     // Every CSC position belongs to exactly one slot, so the copy overwrites all of them.
     const csc = this.cscValues, map = pattern.slotToCsc;
     for (let s = 0; s < count; s++) csc[map[s] as number] = values[s] as number;
@@ -233,6 +267,7 @@ export class RealSystem {
     const outcome = this.lu.factor(pattern.csc, csc, pattern.order, PIVOT_TOLERANCE);
     this.factored = outcome.ok;
     if (!outcome.ok) return { ok: false, singularUnknown: outcome.singularColumn };
+    if (firstFactorisation) this.firstFactors = this.lu.exportStructure(pattern.csc);
     this.factoredValues.set(values.subarray(0, count));
     this.lu.solve(this.rhs, out);
     return { ok: true };

@@ -70,7 +70,7 @@ export function minimumDegreeOrder(pattern: CscPattern): Int32Array {
   const adjacency = symmetricNeighbours(pattern);
 
   // Degree buckets as doubly linked lists so picking the minimum is cheap.
-  const [head, next, prev, degree, mark, order] = int32Views([n + 1, n, n, n, n, n] as const);
+  const [head, next, prev, degree, mark, order, live, eliminated] = int32Views([n + 1, n, n, n, n, n, n, n] as const);
   head.fill(-1);
   next.fill(-1);
   prev.fill(-1);
@@ -90,41 +90,61 @@ export function minimumDegreeOrder(pattern: CscPattern): Int32Array {
     else head[d] = nx;
     if (nx >= 0) prev[nx] = p;
   };
-  for (let v = n - 1; v >= 0; v--) insert(v, Math.min(n, (adjacency[v] as number[]).length));
+  // Eliminated vertices stay in their neighbours' lists and are skipped (live[] counts the rest),
+  // which keeps every list in first-insertion order without shifting it on each removal.
+  const compact = (u: number): number[] => {
+    const list = adjacency[u] as number[];
+    if (list.length <= 2 * (live[u] as number)) return list;
+    const kept = list.filter((w) => eliminated[w] === 0);
+    adjacency[u] = kept;
+    return kept;
+  };
+  for (let v = n - 1; v >= 0; v--) {
+    const d = (adjacency[v] as number[]).length;
+    live[v] = d;
+    insert(v, Math.min(n, d));
+  }
 
   let stamp = 0;
   let minDegree = 0;
+  const neighbours = new Int32Array(n);
   for (let step = 0; step < n; step++) {
     while (minDegree <= n && (head[minDegree] as number) < 0) minDegree++;
     const v = minDegree <= n ? (head[minDegree] as number) : -1;
     if (v < 0) throw new Error("minimumDegreeOrder: bucket structure corrupted");
     remove(v);
     order[step] = v;
-    const neighbours = adjacency[v] as number[];
+    eliminated[v] = 1;
+    let count = 0;
+    for (const u of adjacency[v] as number[]) if (eliminated[u] === 0) neighbours[count++] = u;
     adjacency[v] = [];
-    for (const u of neighbours) {
-      const list = adjacency[u] as number[];
-      const at = list.indexOf(v);
-      if (at >= 0) list.splice(at, 1);
-    }
+    for (let a = 0; a < count; a++) { const u = neighbours[a] as number; live[u] = (live[u] as number) - 1; }
     // Eliminating v joins its neighbours into a clique (the fill the LU will create).
-    for (let a = 0; a < neighbours.length; a++) {
+    for (let a = 0; a + 1 < count; a++) {
       const u = neighbours[a] as number;
-      const listU = adjacency[u] as number[];
-      stamp++;
-      for (const x of listU) mark[x] = stamp;
-      for (let b = a + 1; b < neighbours.length; b++) {
+      const listU = compact(u);
+      // Is w already adjacent to u? Mark u's list, or look for u in the (shorter) lists of the candidates.
+      let candidatesLength = 0;
+      for (let b = a + 1; b < count; b++) candidatesLength += (adjacency[neighbours[b] as number] as number[]).length;
+      const markU = listU.length <= candidatesLength;
+      if (markU) {
+        stamp++;
+        for (const x of listU) mark[x] = stamp;
+      }
+      for (let b = a + 1; b < count; b++) {
         const w = neighbours[b] as number;
-        if (mark[w] !== stamp) {
-          mark[w] = stamp;
-          listU.push(w);
-          (adjacency[w] as number[]).push(u);
-        }
+        const listW = adjacency[w] as number[];
+        if (markU ? mark[w] === stamp : listW.includes(u)) continue;
+        listU.push(w);
+        live[u] = (live[u] as number) + 1;
+        listW.push(u);
+        live[w] = (live[w] as number) + 1;
       }
     }
-    for (const u of neighbours) {
+    for (let a = 0; a < count; a++) {
+      const u = neighbours[a] as number;
       remove(u);
-      const d = Math.min(n, (adjacency[u] as number[]).length);
+      const d = Math.min(n, live[u] as number);
       insert(u, d);
       if (d < minDegree) minDegree = d;
     }

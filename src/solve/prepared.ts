@@ -1,8 +1,9 @@
 // What a solve can re-use from an earlier solve of the same SolverCircuit object: the node
-// numbering, the topology diagnosis (which must pass before anything is solved) and the DC
+// numbering, the topology diagnosis (which must pass before anything is solved), the DC
 // matrix's symbolic analysis (its pattern and fill-reducing order, as the first Newton iteration
-// found them). None of it depends on the numbers a solve computes, so a repeat solve gives the
-// same result to the last bit, only sooner.
+// found them) and the structure of the first factorisation — used only where it is checked to be
+// exactly what a pivot search would choose again. So a repeat solve gives the same result to the
+// last bit, only sooner.
 //
 // The object counts as the same circuit while its element list holds the same element objects
 // with the same names and pins; the values are checked again on every solve. The facts ride on
@@ -11,7 +12,7 @@
 
 import { diagnoseTopology, type TopologyProblem } from "./diagnose.js";
 import { nodeNumbering, pinCount, pinNode, valuesUsable, type NodeNumbering } from "./elaborate.js";
-import type { PatternSnapshot } from "./mna.js";
+import type { FactorStructure, PatternSnapshot } from "./mna.js";
 import type { Element, SolverCircuit } from "./netlist.js";
 
 export interface PreparedCircuit {
@@ -20,6 +21,8 @@ export interface PreparedCircuit {
   problems: TopologyProblem[];
   /** The DC system's pattern after its first analysis, once a solve has made one. */
   dcPattern: PatternSnapshot | null;
+  /** The structure of that solve's first factorisation (over dcPattern). */
+  dcFactors: FactorStructure | null;
 }
 
 interface Entry {
@@ -55,10 +58,10 @@ export function preparedCircuit(circuit: SolverCircuit): PreparedCircuit {
   if (entry && stillSame(entry, circuit.elements)) {
     // Names and pins passed before; only a value edited in place can fail now.
     if (entry.prepared.problems.length === 0 && valuesUsable(circuit)) return entry.prepared;
-    return { numbering: entry.prepared.numbering, problems: diagnoseTopology(circuit, entry.prepared.numbering), dcPattern: null };
+    return { numbering: entry.prepared.numbering, problems: diagnoseTopology(circuit, entry.prepared.numbering), dcPattern: null, dcFactors: null };
   }
   const numbering = nodeNumbering(circuit);
-  const prepared: PreparedCircuit = { numbering, problems: diagnoseTopology(circuit, numbering), dcPattern: null };
+  const prepared: PreparedCircuit = { numbering, problems: diagnoseTopology(circuit, numbering), dcPattern: null, dcFactors: null };
   if (Object.isExtensible(circuit)) {
     const fresh: Entry = { prepared, elements: circuit.elements.slice(), names: circuit.elements.map((el) => el.name) };
     if (entry) holder[PREPARED] = fresh;

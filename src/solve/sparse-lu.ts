@@ -201,6 +201,21 @@ export abstract class SparseLuBase {
  * the finished U entry at multiplier[g] and subtracts it at targets[groupTargets[g] ..
  * groupTargets[g + 1]). U entries whose L column is only the unit diagonal have no group.
  */
+/** See RealSparseLu.exportStructure. */
+export interface FactorStructure {
+  readonly n: number;
+  readonly Lp: Int32Array;
+  readonly Li: Int32Array;
+  readonly Up: Int32Array;
+  readonly Ui: Int32Array;
+  readonly pinv: Int32Array;
+  readonly order: Int32Array;
+  readonly pivotRank: Int32Array;
+  /** Per step, the place of the column's own row among the candidates (−1: not one of them). */
+  readonly ownRank: Int32Array;
+  readonly plan: RefactorPlan;
+}
+
 export interface RefactorPlan {
   size: number;
   unz: number;
@@ -220,6 +235,8 @@ export class RealSparseLu extends SparseLuBase {
   private F = new Float64Array(0);
   private readonly x: Float64Array;
   private readonly y: Float64Array;
+  /** Per pivot step, the pivot's place among the candidate rows in the order factor() met them. */
+  private readonly pivotRank: Int32Array;
 
   constructor(n: number, arena?: Arena, capacityHint = 4 * n) {
     const capacity = Math.max(16, capacityHint);
@@ -231,6 +248,7 @@ export class RealSparseLu extends SparseLuBase {
     this.Ux = new GrowableValues(Ux);
     this.x = x;
     this.y = y;
+    this.pivotRank = arena ? arena.i32(n) : new Int32Array(n);
   }
 
   private factorArray(size: number): Float64Array {
@@ -289,6 +307,14 @@ export class RealSparseLu extends SparseLuBase {
         return { ok: false, singularColumn: col };
       }
       if ((pinv[col] as number) < 0 && Math.abs(x[col] as number) >= best * pivotTolerance) ipiv = col;
+      // Where the pivot stood among the candidates (for refactorAsFactor's check of the same choice).
+      let rank = 0;
+      for (let p = top; p < n; p++) {
+        const i = xi[p] as number;
+        if (i === ipiv) break;
+        if ((pinv[i] as number) < 0) rank++;
+      }
+      this.pivotRank[k] = rank;
       const pivot = x[ipiv] as number;
       Ui[unz] = k;
       Ux[unz++] = pivot;
@@ -353,6 +379,134 @@ export class RealSparseLu extends SparseLuBase {
         F[q] = v / pivot;
       }
       if (!(Math.abs(pivot) > 0) || Math.abs(pivot) < pivotTolerance * largest) return false;
+    }
+    return true;
+  }
+
+  /**
+   * The pivot order and L/U structure of the last factor(), with its refactorisation plan, in
+   * arrays of its own: what a later solve of the same circuit can start from (adopt).
+   */
+  exportStructure(pattern: CscPattern): FactorStructure {
+    const n = this.n, Lp = this.Lp, Up = this.Up, pinv = this.pinv, order = this.order, pivotRank = this.pivotRank;
+    const plan = this.planFor(pattern);
+    const lnz = Lp[n] as number, unz = Up[n] as number;
+    const groups = plan.multiplier.length;
+    const [lp, li, up, ui, pv, or, pr, cr, columnGroups, multiplier, lFirst, groupTargets, targets, cscToFactor] = int32Views([
+      n + 1, lnz, n + 1, unz, n, n, n, n,
+      n + 1, groups, groups, groups + 1, plan.targets.length, plan.cscToFactor.length,
+    ] as const);
+    lp.set(Lp.subarray(0, n + 1));
+    li.set(this.Li.data.subarray(0, lnz));
+    up.set(Up.subarray(0, n + 1));
+    ui.set(this.Ui.data.subarray(0, unz));
+    pv.set(pinv);
+    or.set(order);
+    pr.set(pivotRank);
+    // Where column k's own row (order[k]) stands among its candidates, or −1 if it is not one.
+    const Li = this.Li.data;
+    for (let k = 0; k < n; k++) {
+      const own = pinv[order[k] as number] as number;
+      if (own === k) { cr[k] = pivotRank[k] as number; continue; }
+      cr[k] = -1;
+      if (own < k) continue;
+      const start = (Lp[k] as number) + 1, end = Lp[k + 1] as number;
+      for (let q = start; q < end; q++) {
+        if (Li[q] !== own) continue;
+        const place = q - start;
+        cr[k] = place < (pivotRank[k] as number) ? place : place + 1;
+        break;
+      }
+    }
+    columnGroups.set(plan.columnGroups);
+    multiplier.set(plan.multiplier);
+    lFirst.set(plan.lFirst);
+    groupTargets.set(plan.groupTargets);
+    targets.set(plan.targets);
+    cscToFactor.set(plan.cscToFactor);
+    return {
+      n, Lp: lp, Li: li, Up: up, Ui: ui, pinv: pv, order: or, pivotRank: pr, ownRank: cr,
+      plan: { size: plan.size, unz: plan.unz, columnGroups, multiplier, lFirst, groupTargets, targets, cscToFactor },
+    };
+  }
+
+  /**
+   * factor() by way of a structure exported earlier: the same pivot order and L/U pattern, kept
+   * only if, column by column, factor() would have chosen exactly the pivots the structure has
+   * from exactly these values — then the factors are factor()'s to the last bit, found without
+   * its pivot search and depth-first reach. False (factors unusable) when any choice differs.
+   */
+  refactorAsFactor(structure: FactorStructure, pattern: CscPattern, order: Int32Array, values: Float64Array, count: number,
+    slotToCsc: Int32Array, pivotTolerance: number): Int32Array | null {
+    const n = this.n;
+    if (structure.n !== n || structure.plan.cscToFactor.length !== (pattern.colPtr[n] as number)) return null;
+    for (let k = 0; k < n; k++) if (structure.order[k] !== order[k]) return null;
+    const lnz = structure.Lp[n] as number, unz = structure.Up[n] as number;
+    this.Lp.set(structure.Lp);
+    this.Up.set(structure.Up);
+    this.Li.ensure(lnz);
+    this.Li.data.set(structure.Li);
+    this.Ui.ensure(unz);
+    this.Ui.data.set(structure.Ui);
+    this.pinv.set(structure.pinv);
+    this.order = order;
+    this.pivotRank.set(structure.pivotRank);
+    const plan = structure.plan;
+    this.plan = plan;
+    const F = this.factorArray(plan.size);
+    F.fill(0, 0, plan.size);
+    const positions = new Int32Array(count);
+    for (let s = 0; s < count; s++) {
+      const f = plan.cscToFactor[slotToCsc[s] as number] as number;
+      positions[s] = f;
+      F[f] = values[s] as number;
+    }
+    return this.eliminateAsFactor(structure, pattern, pivotTolerance) ? positions : null;
+  }
+
+  /** eliminate(), checking each pivot against factor()'s choice (see refactorAsFactor). */
+  private eliminateAsFactor(structure: FactorStructure, pattern: CscPattern, pivotTolerance: number): boolean {
+    const n = this.n, F = this.F, Lp = this.Lp, Up = this.Up, order = this.order;
+    const { plan, pivotRank, ownRank } = structure;
+    const { unz, columnGroups, multiplier, lFirst, groupTargets, targets, cscToFactor } = plan;
+    const { colPtr } = pattern;
+    let g = 0;
+    for (let k = 0; k < n; k++) {
+      // factor()'s singularity test compares with the column as assembled, before any update.
+      const col = order[k] as number;
+      let colMax = 0;
+      const aEnd = colPtr[col + 1] as number;
+      for (let p = colPtr[col] as number; p < aEnd; p++) {
+        const v = Math.abs(F[cscToFactor[p] as number] as number);
+        if (v > colMax) colMax = v;
+      }
+      const gEnd = columnGroups[k + 1] as number;
+      for (; g < gEnd; g++) {
+        const xj = F[multiplier[g] as number] as number;
+        if (xj === 0) continue;
+        const end = groupTargets[g + 1] as number;
+        for (let t = groupTargets[g] as number, q = lFirst[g] as number; t < end; t++, q++) {
+          const i = targets[t] as number;
+          F[i] = (F[i] as number) - (F[q] as number) * xj;
+        }
+      }
+      // The candidates in factor()'s order are column k's L entries with the pivot at its rank.
+      const pivot = F[(Up[k + 1] as number) - 1] as number;
+      const lStart = unz + (Lp[k] as number) + 1, lEnd = unz + (Lp[k + 1] as number);
+      const rank = pivotRank[k] as number, own = ownRank[k] as number;
+      let best = -1, first = -1, ownMagnitude = 0;
+      for (let q = lStart, place = 0; ; place++) {
+        let t: number;
+        if (place === rank) t = Math.abs(pivot);
+        else if (q < lEnd) t = Math.abs(F[q++] as number);
+        else break;
+        if (t > best) { best = t; first = place; }
+        if (place === own) ownMagnitude = t;
+      }
+      if (first < 0 || !(best > SINGULAR_RELATIVE * colMax) || best === 0) return false;
+      const chosen = own >= 0 && ownMagnitude >= best * pivotTolerance ? own : first;
+      if (chosen !== rank) return false;
+      for (let q = lStart; q < lEnd; q++) F[q] = (F[q] as number) / pivot;
     }
     return true;
   }
