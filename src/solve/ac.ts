@@ -5,6 +5,7 @@
 import { solveOperatingPoint, solvedStateOf } from "./dc.js";
 import type { AcLoadContext } from "./device.js";
 import { elaborate, type ElaboratedCircuit } from "./elaborate.js";
+import { preparedCircuit } from "./prepared.js";
 import { ComplexSystem, GROUND, type Unknown } from "./mna.js";
 import type { SolverCircuit } from "./netlist.js";
 import { ComplexStamper } from "./stamp.js";
@@ -32,7 +33,8 @@ function failedResult(frequencies: number[], problem: string): AcResult {
 
 /** The devices to linearise: the operating point's own when it belongs to this circuit. */
 function linearisationFor(circuit: SolverCircuit, op: OperatingPoint | null, passiveOnly: boolean): ElaboratedCircuit | string {
-  if (passiveOnly) return elaborate(circuit);
+  // The passive view needs no operating point; the node numbering is the circuit's own (shared).
+  if (passiveOnly) return elaborate(circuit, preparedCircuit(circuit).numbering);
   if (!op) return "an AC analysis with active devices needs a DC operating point";
   if (!op.converged) return `no small-signal analysis without a DC operating point: ${op.problem ?? "it did not converge"}`;
   const state = solvedStateOf(op);

@@ -364,11 +364,19 @@ export class ComplexSparseLu extends SparseLuBase {
     const yr = this.yr, ym = this.ym, zr = this.zr, zm = this.zm;
     const Lp = this.Lp, Li = this.Li.data, Up = this.Up, Ui = this.Ui.data, Fr = this.Fr, Fm = this.Fm, Gr = this.Gr, Gm = this.Gm;
     const unz = Up[n] as number;
+    // A sweep drives one source: the right-hand side has a nonzero or two, so clear and place
+    // those (its entries are sums started from +0, never −0, so skipping the zeros is exact).
+    yr.fill(0, 0, n);
+    ym.fill(0, 0, n);
     for (let i = 0; i < n; i++) {
+      const re = bRe[i] as number, im = bIm[i] as number;
+      if (re === 0 && im === 0) continue;
       const k = pinv[i] as number;
-      yr[k] = zr[k] = bRe[i] as number;
-      ym[k] = zm[k] = bIm[i] as number;
+      yr[k] = re;
+      ym[k] = im;
     }
+    zr.set(yr.subarray(0, n));
+    zm.set(ym.subarray(0, n));
     for (let j = 0; j < n; j++) {
       const ar = yr[j] as number, am = ym[j] as number, br = zr[j] as number, bm = zm[j] as number;
       const skipA = ar === 0 && am === 0, skipB = br === 0 && bm === 0;

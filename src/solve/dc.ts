@@ -325,7 +325,9 @@ function emptyResult(problem: string): OperatingPoint {
 function collectResult(solver: DcSolver, converged: boolean, method: SolveMethod, problem?: string): OperatingPoint {
   const { unknowns, devices } = solver.elaborated;
   const x = solver.x;
-  if (!x.every(Number.isFinite)) x.fill(0);
+  for (let i = 0; i < x.length; i++) {
+    if (!Number.isFinite(x[i] as number)) { x.fill(0); break; }
+  }
   solver.finalEvaluation(1);
   const nodeVoltages: Record<string, number> = {};
   for (let i = 0; i < unknowns.nodeCount; i++) nodeVoltages[unknowns.nodeName(i)] = x[i] as number;

@@ -11,7 +11,7 @@
 // JSON), so they live exactly as long as the circuit does.
 
 import { diagnoseTopology, type TopologyProblem } from "./diagnose.js";
-import { nodeNumbering, pinCount, pinNode, valuesUsable, type NodeNumbering } from "./elaborate.js";
+import { nodeNumbering, valuesUsable, type NodeNumbering } from "./elaborate.js";
 import type { FactorStructure, PatternSnapshot } from "./mna.js";
 import type { Element, SolverCircuit } from "./netlist.js";
 
@@ -45,8 +45,15 @@ function stillSame(entry: Entry, elements: readonly Element[]): boolean {
   for (let i = 0; i < elements.length; i++) {
     const el = elements[i] as Element;
     if (el !== known[i] || el.name !== names[i]) return false;
-    const count = pinCount(el);
-    for (let p = 0; p < count; p++) if (pinNode(el, p) !== pins[k++]) return false;
+    // The pins in pinNode order, written out per kind: this runs on every solve.
+    switch (el.kind) {
+      case "R": case "C": case "L": if (el.a !== pins[k] || el.b !== pins[k + 1]) return false; k += 2; break;
+      case "V": case "I": if (el.pos !== pins[k] || el.neg !== pins[k + 1]) return false; k += 2; break;
+      case "D": if (el.anode !== pins[k] || el.cathode !== pins[k + 1]) return false; k += 2; break;
+      case "Q": if (el.c !== pins[k] || el.b !== pins[k + 1] || el.e !== pins[k + 2]) return false; k += 3; break;
+      case "J": if (el.d !== pins[k] || el.g !== pins[k + 1] || el.s !== pins[k + 2]) return false; k += 3; break;
+      case "M": if (el.d !== pins[k] || el.g !== pins[k + 1] || el.s !== pins[k + 2] || el.b !== pins[k + 3]) return false; k += 4; break;
+    }
   }
   return true;
 }

@@ -1,7 +1,7 @@
 // Linear elements: resistor, capacitor (series ESR–ESL), inductor (series winding resistance),
 // independent voltage source (optional series resistance) and current source.
 
-import type { Device } from "../device.js";
+import type { AcLoadContext, Device } from "../device.js";
 import type { UnknownMap } from "../mna.js";
 import type {
   CapacitorElement,
@@ -10,27 +10,37 @@ import type {
   ResistorElement,
   VoltageSourceElement,
 } from "../netlist.js";
-import { voltageOf } from "../stamp.js";
+import { voltageOf, type ComplexStamp, type RealStamp, type Unknown } from "../stamp.js";
 
 /** SPICE replaces a zero resistance by 1 mΩ; we do the same rather than reject a jumper. */
 const MIN_RESISTANCE = 1e-3;
 /** Floor on a series R-L-C branch impedance so a lossless part at exact resonance stays finite. */
 const MIN_BRANCH_IMPEDANCE = 1e-9;
 
+/**
+ * Resistors and capacitors are most of a board's elements, so they are small class instances
+ * (methods shared on the prototype) rather than objects of closures: elaborating a circuit then
+ * allocates a few fields per part instead of a closure context and two functions.
+ */
+class Resistor implements Device {
+  readonly active = false;
+  readonly dcConstant = true;
+  readonly acAffine = true;
+  private readonly g: number;
+
+  constructor(readonly name: string, private readonly a: Unknown, private readonly b: Unknown, ohms: number) {
+    const r = Math.abs(ohms) < MIN_RESISTANCE ? Math.sign(ohms || 1) * MIN_RESISTANCE : ohms;
+    this.g = 1 / r;
+  }
+
+  get nodes(): readonly Unknown[] { return [this.a, this.b]; }
+  loadDc(_x: Float64Array, stamp: RealStamp): void { stamp.conductance(this.a, this.b, this.g); }
+  loadAc(stamp: ComplexStamp): void { stamp.admittance(this.a, this.b, this.g, 0); }
+}
+
 export function resistorDevice(el: ResistorElement, unknowns: UnknownMap): Device {
   const a = unknowns.node(el.a);
-  const b = unknowns.node(el.b);
-  const r = Math.abs(el.ohms) < MIN_RESISTANCE ? Math.sign(el.ohms || 1) * MIN_RESISTANCE : el.ohms;
-  const g = 1 / r;
-  return {
-    name: el.name,
-    active: false,
-    nodes: [a, b],
-    dcConstant: true,
-    acAffine: true,
-    loadDc(_x, stamp) { stamp.conductance(a, b, g); },
-    loadAc(stamp) { stamp.admittance(a, b, g, 0); },
-  };
+  return new Resistor(el.name, a, unknowns.node(el.b), el.ohms);
 }
 
 /** Admittance of ESR + jωESL + 1/(jωC), written into a two-element scratch array. */
@@ -52,26 +62,30 @@ export function seriesRlcAdmittance(omega: number, farads: number, esr: number, 
   return out;
 }
 
+class Capacitor implements Device {
+  readonly active = false;
+  readonly dcConstant = true;
+  /** A pure capacitance is jωC; with ESR or ESL the series branch is not affine in ω. */
+  readonly acAffine: boolean;
+  private readonly y: [number, number] = [0, 0];
+
+  constructor(readonly name: string, private readonly a: Unknown, private readonly b: Unknown,
+    private readonly farads: number, private readonly esr: number, private readonly esl: number) {
+    this.acAffine = esr === 0 && esl === 0;
+  }
+
+  get nodes(): readonly Unknown[] { return [this.a, this.b]; }
+  /** Open at DC: nothing to stamp. */
+  loadDc(): void {}
+  loadAc(stamp: ComplexStamp, ctx: AcLoadContext): void {
+    const y = seriesRlcAdmittance(ctx.omega, this.farads, this.esr, this.esl, this.y);
+    stamp.admittance(this.a, this.b, y[0], y[1]);
+  }
+}
+
 export function capacitorDevice(el: CapacitorElement, unknowns: UnknownMap): Device {
   const a = unknowns.node(el.a);
-  const b = unknowns.node(el.b);
-  const esr = el.esr ?? 0;
-  const esl = el.esl ?? 0;
-  const y: [number, number] = [0, 0];
-  return {
-    name: el.name,
-    active: false,
-    nodes: [a, b],
-    dcConstant: true,
-    // A pure capacitance is jωC; with ESR or ESL the series branch is not affine in ω.
-    acAffine: esr === 0 && esl === 0,
-    // Open at DC: nothing to stamp.
-    loadDc() {},
-    loadAc(stamp, ctx) {
-      seriesRlcAdmittance(ctx.omega, el.farads, esr, esl, y);
-      stamp.admittance(a, b, y[0], y[1]);
-    },
-  };
+  return new Capacitor(el.name, a, unknowns.node(el.b), el.farads, el.esr ?? 0, el.esl ?? 0);
 }
 
 /**
