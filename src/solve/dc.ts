@@ -51,20 +51,22 @@ interface NewtonRun {
 
 /** Solver state for one circuit: the devices, the matrix and the current iterate. */
 class DcSolver {
-  readonly system: RealSystem;
-  readonly stamp: RealStamper;
-  x: Float64Array;
-  private xNew: Float64Array;
+  system!: RealSystem;
+  private stamp!: RealStamper;
+  x!: Float64Array;
+  private xNew!: Float64Array;
   totalIterations = 0;
   readonly ctx: DcLoadContext;
   private baseReady = false;
   private readonly varying: Device[];
   /** Absolute part of each unknown's convergence tolerance: ABSTOL for currents, VNTOL for voltages. */
-  private readonly absTol: Float64Array;
+  private absTol!: Float64Array;
   /** Unknowns that are node voltages, where gmin stepping puts its shunts. */
-  private readonly voltageUnknowns: Int32Array;
+  private voltageUnknowns!: Int32Array;
   /** Last device whose junction step was limited in the latest load, for the explanation. */
   private lastLimiting: string | undefined;
+  /** The pattern snapshot given did not fit the circuit, so the solve went on without it. */
+  leftSnapshot = false;
 
   constructor(
     readonly elaborated: ElaboratedCircuit,
@@ -74,23 +76,31 @@ class DcSolver {
     pattern: PatternSnapshot | null,
     factors: FactorStructure | null,
   ) {
-    const n = elaborated.unknowns.size;
-    this.system = new RealSystem(n, pattern ?? undefined, 3 * n, factors);
-    this.stamp = new RealStamper(this.system);
-    const arena = this.system.arena;
-    this.x = arena.f64(n);
-    this.xNew = arena.f64(n);
-    this.absTol = arena.f64(n);
     this.ctx = { mode: "normal", gmin, srcFactor: 1, limited: false };
     this.varying = elaborated.devices.filter((d) => !d.dcConstant);
+    this.attach(new RealSystem(elaborated.unknowns.size, pattern ?? undefined, 3 * elaborated.unknowns.size, factors));
+  }
+
+  /** Takes `system` as the matrix, with the iterate and per-unknown vectors from its arena. */
+  private attach(system: RealSystem): void {
+    const { unknowns } = this.elaborated;
+    const n = unknowns.size;
+    const arena = system.arena;
+    const x = arena.f64(n);
+    if (this.x) x.set(this.x);
+    this.system = system;
+    this.stamp = new RealStamper(system);
+    this.x = x;
+    this.xNew = arena.f64(n);
+    this.absTol = arena.f64(n);
     let voltages = 0;
     for (let i = 0; i < n; i++) {
-      const branch = elaborated.unknowns.isBranch(i);
+      const branch = unknowns.isBranch(i);
       this.absTol[i] = branch ? ABSTOL : VNTOL;
       if (!branch) voltages++;
     }
     this.voltageUnknowns = arena.i32(voltages);
-    for (let i = 0, v = 0; i < n; i++) if (!elaborated.unknowns.isBranch(i)) this.voltageUnknowns[v++] = i;
+    for (let i = 0, v = 0; i < n; i++) if (!unknowns.isBranch(i)) this.voltageUnknowns[v++] = i;
   }
 
   private load(x: Float64Array, mode: DcMode, srcFactor: number, diagGmin: number): void {
@@ -120,6 +130,16 @@ class DcSolver {
         const i = voltages[v] as number;
         this.system.add(i, i, diagGmin);
       }
+    }
+    if (this.system.offSnapshot) {
+      // The circuit object was edited in place since the pattern was recorded: start over from
+      // a fresh pattern, so the result is what solving the circuit afresh gives.
+      const stale = this.system;
+      this.leftSnapshot = true;
+      this.attach(new RealSystem(this.elaborated.unknowns.size, undefined, 3 * this.elaborated.unknowns.size));
+      stale.release();
+      this.baseReady = false;
+      this.load(this.x, mode, srcFactor, diagGmin);
     }
   }
 
@@ -375,7 +395,7 @@ export function solveOperatingPoint(circuit: SolverCircuit, opts: DcOptions = {}
 
 function solveWith(solver: DcSolver, prepared: PreparedCircuit): OperatingPoint {
   const plain = plainNewton(solver);
-  if (!prepared.dcPattern) {
+  if (!prepared.dcPattern || solver.leftSnapshot) {
     prepared.dcPattern = solver.system.firstPattern;
     prepared.dcFactors = solver.system.firstFactors;
   }

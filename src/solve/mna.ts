@@ -176,6 +176,9 @@ export class RealSystem {
     releaseArena(this.arena);
   }
 
+  /** The first assembly did not replay the snapshot this system started from (see MatrixPattern.offSnapshot). */
+  get offSnapshot(): boolean { return this.pattern.offSnapshot; }
+
   /** Starts a new assembly: clears values and right-hand side. */
   begin(): void {
     this.pattern.rewind();

@@ -149,6 +149,15 @@ export class MatrixPattern {
   private symbolicStale = true;
   /** No symbolic analysis yet, neither made nor inherited from a snapshot. */
   neverPrepared = true;
+  /** Started from a snapshot (see snapshot()). */
+  fromSnapshot = false;
+  /**
+   * Started from a snapshot, and the first assembly did not replay its stamps: the circuit is
+   * not the one the snapshot was made from (an element edited in place).
+   */
+  offSnapshot = false;
+  /** The first factorisation has been asked for (prepare() called), so a first assembly is over. */
+  private assembled = false;
   csc: CscPattern = { n: 0, colPtr: new Int32Array(1), rowIdx: new Int32Array(0) };
   /** Position of each slot inside the CSC value array. */
   slotToCsc: Int32Array = new Int32Array(0);
@@ -165,6 +174,7 @@ export class MatrixPattern {
       this.order = from.order;
       this.symbolicStale = false;
       this.neverPrepared = false;
+      this.fromSnapshot = true;
       return;
     }
     // MNA matrices of circuits carry a handful of entries per unknown; the tables grow if not.
@@ -205,6 +215,7 @@ export class MatrixPattern {
     if (position < tape.length && tape.rows[position] === row && tape.cols[position] === col) {
       return tape.slots[position] as number;
     }
+    if (this.fromSnapshot && !this.assembled) this.offSnapshot = true;
     let slot = this.slots.find(row, col);
     if (slot < 0) {
       slot = this.slots.insert(row, col);
@@ -216,6 +227,7 @@ export class MatrixPattern {
 
   /** Rebuilds the CSC pattern (every diagonal included) and the column order if new entries appeared. */
   prepare(): boolean {
+    this.assembled = true;
     if (!this.symbolicStale) return false;
     const n = this.n;
     const table = this.slots;
