@@ -5,7 +5,7 @@
 
 import type { CscPattern } from "./ordering.js";
 import { GrowableValues, SINGULAR_RELATIVE, SparseLuBase, type FactorOutcome, type RefactorPlan } from "./sparse-lu.js";
-import { float64Views } from "./views.js";
+import { float64Views, NO_DOUBLES } from "./views.js";
 
 export class ComplexSparseLu extends SparseLuBase {
   private readonly Lr: GrowableValues;
@@ -13,8 +13,8 @@ export class ComplexSparseLu extends SparseLuBase {
   private readonly Ur: GrowableValues;
   private readonly Um: GrowableValues;
   /** Real and imaginary factors in the layout of SparseLuBase.plan. */
-  private Fr = new Float64Array(0);
-  private Fm = new Float64Array(0);
+  private Fr: Float64Array = NO_DOUBLES;
+  private Fm: Float64Array = NO_DOUBLES;
   private readonly xr: Float64Array;
   private readonly xm: Float64Array;
   private readonly yr: Float64Array;
@@ -278,10 +278,10 @@ export class ComplexSparseLu extends SparseLuBase {
   }
 
   /** Factors of the second matrix of a pair (see refactorAffinePair), in the layout of Fr/Fm. */
-  private Gr = new Float64Array(0);
-  private Gm = new Float64Array(0);
-  private zr = new Float64Array(0);
-  private zm = new Float64Array(0);
+  private Gr: Float64Array = NO_DOUBLES;
+  private Gm: Float64Array = NO_DOUBLES;
+  private zr: Float64Array = NO_DOUBLES;
+  private zm: Float64Array = NO_DOUBLES;
 
   /**
    * refactorAffine at two frequencies in one pass over the plan: each index is read once for

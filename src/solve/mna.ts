@@ -5,7 +5,7 @@
 import { ComplexSparseLu } from "./complex-lu.js";
 import { MatrixPattern, type PatternSnapshot } from "./pattern.js";
 import { RealSparseLu, type FactorStructure } from "./sparse-lu.js";
-import { acquireArena, float64Views, releaseArena, type Arena } from "./views.js";
+import { acquireArena, float64Views, NO_DOUBLES, releaseArena, type Arena } from "./views.js";
 
 export type { PatternSnapshot } from "./pattern.js";
 export type { FactorStructure } from "./sparse-lu.js";
@@ -120,16 +120,16 @@ export class RealSystem {
   private readonly pattern: MatrixPattern;
   private values: Float64Array;
   readonly rhs: Float64Array;
-  private cscValues = new Float64Array(0);
+  private cscValues: Float64Array = NO_DOUBLES;
   private readonly lu: RealSparseLu;
   /** A factorisation with the current pattern exists, so its pivot order can be re-used. */
   private factored = false;
-  private base = new Float64Array(0);
+  private base: Float64Array = NO_DOUBLES;
   private readonly baseRhs: Float64Array;
   /** Tape position after the constant part, where every later assembly continues. */
   private baseLength = 0;
   /** The matrix the current factors are of (slot values), to skip re-factorising an unchanged one. */
-  private factoredValues = new Float64Array(0);
+  private factoredValues: Float64Array = NO_DOUBLES;
 
   /**
    * Where the system's arrays, and its LU's, come from: one buffer sized for a typical circuit
@@ -287,8 +287,8 @@ export class ComplexSystem {
   private im: Float64Array;
   readonly rhsRe: Float64Array;
   readonly rhsIm: Float64Array;
-  private cscRe = new Float64Array(0);
-  private cscIm = new Float64Array(0);
+  private cscRe: Float64Array = NO_DOUBLES;
+  private cscIm: Float64Array = NO_DOUBLES;
   private readonly lu: ComplexSparseLu;
   private factored = false;
   private slotPositions: Int32Array | null = null;
@@ -316,12 +316,12 @@ export class ComplexSystem {
     this.rhsIm.fill(0);
   }
 
-  private y0Re = new Float64Array(0);
-  private y0Im = new Float64Array(0);
-  private y1Re = new Float64Array(0);
-  private y1Im = new Float64Array(0);
-  private rhs0Re = new Float64Array(0);
-  private rhs0Im = new Float64Array(0);
+  private y0Re: Float64Array = NO_DOUBLES;
+  private y0Im: Float64Array = NO_DOUBLES;
+  private y1Re: Float64Array = NO_DOUBLES;
+  private y1Im: Float64Array = NO_DOUBLES;
+  private rhs0Re: Float64Array = NO_DOUBLES;
+  private rhs0Im: Float64Array = NO_DOUBLES;
 
   /**
    * Affine-in-ω assembly, Y(ω) = Y0 + ω·Y1: call after assembling at ω = 0 (which = 0), then

@@ -8,7 +8,10 @@
 // (snapshot), which then skips all of that.
 
 import { minimumDegreeOrder, type CscPattern } from "./ordering.js";
-import { int32Views } from "./views.js";
+import { int32Views, NO_INTS } from "./views.js";
+
+/** The pattern of a system that has not been analysed yet. */
+const NO_PATTERN: CscPattern = { n: 0, colPtr: new Int32Array(1), rowIdx: NO_INTS };
 
 class SlotTape {
   rows: Int32Array;
@@ -158,10 +161,10 @@ export class MatrixPattern {
   offSnapshot = false;
   /** The first factorisation has been asked for (prepare() called), so a first assembly is over. */
   private assembled = false;
-  csc: CscPattern = { n: 0, colPtr: new Int32Array(1), rowIdx: new Int32Array(0) };
+  csc: CscPattern = NO_PATTERN;
   /** Position of each slot inside the CSC value array. */
-  slotToCsc: Int32Array = new Int32Array(0);
-  order: Int32Array = new Int32Array(0);
+  slotToCsc: Int32Array = NO_INTS;
+  order: Int32Array = NO_INTS;
 
   constructor(n: number, from?: PatternSnapshot) {
     this.n = n;

@@ -15,7 +15,7 @@
 // left-looking factorisation, so its results are bit-for-bit the same.
 
 import type { CscPattern } from "./ordering.js";
-import { float64Views, int32Views, type Arena } from "./views.js";
+import { float64Views, int32Views, NO_DOUBLES, type Arena } from "./views.js";
 
 export type FactorOutcome = { ok: true } | { ok: false; singularColumn: number };
 
@@ -232,7 +232,7 @@ export class RealSparseLu extends SparseLuBase {
   private readonly Lx: GrowableValues;
   private readonly Ux: GrowableValues;
   /** The factors in the layout of SparseLuBase.plan: U at [0, unz), L at unz + L position. */
-  private F = new Float64Array(0);
+  private F: Float64Array = NO_DOUBLES;
   private readonly x: Float64Array;
   private readonly y: Float64Array;
   /** Per pivot step, the pivot's place among the candidate rows in the order factor() met them. */

@@ -2,6 +2,10 @@
 // is a native allocation (hundreds of nanoseconds, and external memory the collector accounts
 // for); a solve needs dozens of such arrays, sized together, so they share one buffer instead.
 
+/** Zero-length arrays, shared by every field that has nothing yet (they hold nothing to change). */
+export const NO_DOUBLES: Float64Array<ArrayBuffer> = new Float64Array(0);
+export const NO_INTS: Int32Array<ArrayBuffer> = new Int32Array(0);
+
 type Views<T extends readonly number[]> = { -readonly [K in keyof T]: Int32Array<ArrayBuffer> };
 type FloatViews<T extends readonly number[]> = { -readonly [K in keyof T]: Float64Array<ArrayBuffer> };
 

@@ -62,12 +62,14 @@ export function seriesRlcAdmittance(omega: number, farads: number, esr: number, 
   return out;
 }
 
+/** Scratch for a capacitor's admittance, used and read straight away by one stamp at a time. */
+const ADMITTANCE: [number, number] = [0, 0];
+
 class Capacitor implements Device {
   readonly active = false;
   readonly dcConstant = true;
   /** A pure capacitance is jωC; with ESR or ESL the series branch is not affine in ω. */
   readonly acAffine: boolean;
-  private readonly y: [number, number] = [0, 0];
 
   constructor(readonly name: string, private readonly a: Unknown, private readonly b: Unknown,
     private readonly farads: number, private readonly esr: number, private readonly esl: number) {
@@ -78,7 +80,7 @@ class Capacitor implements Device {
   /** Open at DC: nothing to stamp. */
   loadDc(): void {}
   loadAc(stamp: ComplexStamp, ctx: AcLoadContext): void {
-    const y = seriesRlcAdmittance(ctx.omega, this.farads, this.esr, this.esl, this.y);
+    const y = seriesRlcAdmittance(ctx.omega, this.farads, this.esr, this.esl, ADMITTANCE);
     stamp.admittance(this.a, this.b, y[0], y[1]);
   }
 }
