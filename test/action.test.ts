@@ -11,6 +11,8 @@ import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import ajvDraft04 from "ajv-draft-04";
 import ajvFormats from "ajv-formats";
+import { lint } from "../src/engine/lint.js";
+import { countBySeverity } from "../src/engine/result.js";
 
 const repo = new URL("..", import.meta.url).pathname;
 const bundle = join(repo, "dist/index.js");
@@ -123,4 +125,30 @@ describe("the bundled Action", () => {
     expect(bad.code).toBe(2);
     expect(bad.stdout).toContain("::error title=loadline::input 'annotations' must be true or false, got 'yes'");
   });
+
+  it("on the demo board: one annotation per finding on its part's symbol line, and outputs that match an in-process lint", () => {
+    cpSync(join(repo, "fixtures/demo"), join(workspace, "hw/demo"), { recursive: true });
+    const board = "hw/demo/demo-preamp.kicad_sch";
+    const expected = lint({ paths: [join(workspace, board)] });
+    const counts = countBySeverity(expected);
+    const run = runAction({ paths: board, "fail-on": "warning" });
+    expect(run.code).toBe(counts.error + counts.warning > 0 ? 1 : 0);
+    expect(run.outputs["errors"]).toBe(String(counts.error));
+    expect(run.outputs["warnings"]).toBe(String(counts.warning));
+    expect(run.outputs["notes"]).toBe(String(counts.note));
+    const lines = readFileSync(join(workspace, board), "utf8").split("\n");
+    const annotations = run.stdout.split("\n").filter((l) => /^::(error|warning|notice) /.test(l));
+    const findings = expected.designs.flatMap((d) => d.findings);
+    expect(annotations).toHaveLength(findings.length);
+    for (const f of findings) {
+      const level = f.severity === "note" ? "notice" : f.severity;
+      const mine = annotations.find((a) => a.startsWith(`::${level} title=loadline ${f.rule} `) && a.includes(`file=${board},line=${f.line},`));
+      expect(mine, `${f.rule} on ${f.parts.join(", ")}`).toBeDefined();
+      // The annotation's line is the part's `(symbol` list in the schematic.
+      expect(lines[f.line - 1]?.trimStart().startsWith("(symbol")).toBe(true);
+    }
+    // The summary carries the rail's worst figure.
+    expect(run.summary).toContain("+12V");
+  });
 });
+
