@@ -17,6 +17,7 @@ import { parseSimParams, parseSimPins, parseSourceSpec, type SourceSpec } from "
 import { parseSpiceNumber } from "../circuit/spice-number.js";
 import { formatQuantity, parseQuantity } from "../circuit/units.js";
 import { estimateCapacitorParasitics } from "./parasitics.js";
+import { localNetName, voltsFromNetName } from "../circuit/net-voltage.js";
 import { findModelCard, parseModelCards, type ParsedModels } from "./spice-card.js";
 import { findModel, zenerFromValue, type LibraryPart, type PartRatings } from "./parts/library.js";
 import { findSubcircuit, type SubcircuitDef } from "./subckt-syntax.js";
@@ -71,22 +72,8 @@ function symbolName(libId: string): string {
   return i < 0 ? libId : libId.slice(i + 1);
 }
 
-function localName(net: string): string {
-  const trimmed = net.endsWith("/") ? net.slice(0, -1) : net;
-  return trimmed.slice(trimmed.lastIndexOf("/") + 1);
-}
-
-/** Volts a supply net's name states: `+9V`, `-5V`, `+3V3`, `+3.3V`, `5V`, `VCC_9V`, `+12V_RF`. */
-export function railVoltsFromName(net: string): number | undefined {
-  const name = localName(net);
-  const m = /(?:^|[^0-9A-Za-z.])([+-]?)(\d+)(?:[.,](\d+))?V(\d+)?(?![0-9])/i.exec(name) ?? /^([+-]?)(\d+)(?:[.,](\d+))?V(\d+)?$/i.exec(name);
-  if (!m) return undefined;
-  const [, sign, whole, decimals, rkm] = m;
-  if (decimals !== undefined && rkm !== undefined) return undefined;
-  const frac = decimals ?? rkm;
-  const v = Number(frac !== undefined ? `${whole}.${frac}` : whole);
-  return sign === "-" ? -v : v;
-}
+/** Volts a supply net's name states (`+9V`, `-5V`, `+3V3`); one reading for the Context and the builder. */
+export const railVoltsFromName = voltsFromNetName;
 
 function isExcluded(part: Part): boolean {
   if (part.dnp || part.excludedFromSim) return true;
@@ -321,7 +308,7 @@ class Builder {
   constructor(readonly circuit: Circuit, readonly opts: BuildOptions) {
     const groundNames = new Set((opts.groundNames ?? []).map((n) => n.toLowerCase()));
     for (const net of circuit.nets) {
-      const ground = net.isGround || net.name === "0" || [net.name, localName(net.name), ...net.aliases].some((a) => groundNames.has(a.toLowerCase()));
+      const ground = net.isGround || net.name === "0" || [net.name, localNetName(net.name), ...net.aliases].some((a) => groundNames.has(a.toLowerCase()));
       this.nodeOfNet[net.name] = ground ? "0" : net.name;
     }
     this.ctx = { circuit, notes: this.notes, libraries: new Map() };
@@ -648,7 +635,7 @@ class Builder {
       if (!net.isPower && configured === undefined) continue;
       const volts = configured ?? railCandidates(net).map(railVoltsFromName).find((v) => v !== undefined);
       if (volts === undefined) {
-        this.notes.push({ message: `power net ${net.name} has no known voltage: give it one under "rails" in the config, e.g. "rails": { "${localName(net.name)}": "9V" }` });
+        this.notes.push({ message: `power net ${net.name} has no known voltage: give it one under "rails" in the config, e.g. "rails": { "${localNetName(net.name)}": "9V" }` });
         continue;
       }
       const driver = this.sourceDriven.get(node);
@@ -662,7 +649,7 @@ class Builder {
 }
 
 function railCandidates(net: Net): string[] {
-  return [...new Set([net.name, localName(net.name), ...net.aliases])];
+  return [...new Set([net.name, localNetName(net.name), ...net.aliases])];
 }
 
 /** Internal resistance when the part gives none [CP: typical fresh cells at room temperature]. */
