@@ -7,8 +7,8 @@ import type { SolverCircuit } from "../solve/netlist.js";
 import type { ComplexPoint } from "./context-types.js";
 import { buildSolverCircuit } from "../solve/from-circuit.js";
 import type { BuildNote, PartRatings } from "../solve/from-circuit.js";
-import type { OperatingPoint } from "../solve/types.js";
-import { acSweep, impedanceToGround, solveOperatingPoint, THERMAL_VOLTAGE } from "../solve/index.js";
+import type { ImpedancePoint, OperatingPoint } from "../solve/types.js";
+import { acSweep, impedanceBetween, impedanceToGround, solveOperatingPoint, THERMAL_VOLTAGE } from "../solve/index.js";
 import { E_SERIES } from "../solve/eseries.js";
 import type { ESeriesName } from "../solve/eseries.js";
 import { estimateCapacitorParasitics, selfResonantFrequency } from "../solve/parasitics.js";
@@ -75,30 +75,21 @@ function toPoints(frequencies: number[], re: ArrayLike<number>, im: ArrayLike<nu
   });
 }
 
-/** Z from a node to ground (1 A injected). Undefined when the network could not be solved. */
-export function impedanceAt(solver: SolverCircuit, op: OperatingPoint | null, node: string, freqs: number[], passiveOnly: boolean): ComplexPoint[] | undefined {
-  const points = impedanceToGround(solver, op, node, freqs, { passiveOnly });
+/** The solver's impedance points as the Context's, or undefined when any point is unsolved (NaN). */
+function solvedPoints(points: ImpedancePoint[]): ComplexPoint[] | undefined {
   if (points.some((p) => !Number.isFinite(p.mag))) return undefined;
   return points.map((p) => ({ hertz: p.f, re: p.re, im: p.im, magnitude: p.mag }));
 }
 
-/** Z between two nodes: 1 A driven into `a` and drawn from `b`, Z = V(a) − V(b). Needs the
- * operating point (the passive-only view removes every source, the probe included). */
+/** Z from a node to ground (1 A injected). Undefined when the network could not be solved. */
+export function impedanceAt(solver: SolverCircuit, op: OperatingPoint | null, node: string, freqs: number[], passiveOnly: boolean): ComplexPoint[] | undefined {
+  return solvedPoints(impedanceToGround(solver, op, node, freqs, { passiveOnly }));
+}
+
+/** Z between two nodes: 1 A driven into `a` and drawn from `b`, Z = V(a) − V(b). Undefined when
+ * the network could not be solved. */
 export function impedanceBetweenAt(solver: SolverCircuit, op: OperatingPoint | null, a: string, b: string, freqs: number[], passiveOnly: boolean): ComplexPoint[] | undefined {
-  if (passiveOnly) return undefined;
-  // SPICE sign: the source's current leaves it at `neg`, so neg = a puts 1 A into a.
-  const probe = { kind: "I" as const, name: "Iprobe_between", pos: b, neg: a, dc: 0, ac: 1 };
-  const circuit: SolverCircuit = { title: solver.title, elements: [...solver.elements, probe] };
-  const ac = acSweep(circuit, op, freqs, { kind: "source", name: probe.name });
-  if (ac.problem !== undefined) return undefined;
-  const zero = { re: new Float64Array(freqs.length), im: new Float64Array(freqs.length) };
-  const va = a === "0" ? zero : ac.nodeVoltages[a];
-  const vb = b === "0" ? zero : ac.nodeVoltages[b];
-  if (!va || !vb) return undefined;
-  const re = freqs.map((_, k) => (va.re[k] ?? Number.NaN) - (vb.re[k] ?? Number.NaN));
-  const im = freqs.map((_, k) => (va.im[k] ?? Number.NaN) - (vb.im[k] ?? Number.NaN));
-  const points = toPoints(freqs, re, im);
-  return points.some((p) => !Number.isFinite(p.magnitude)) ? undefined : points;
+  return solvedPoints(impedanceBetween(solver, op, a, b, freqs, { passiveOnly }));
 }
 
 /** V(output)/V(input) with a test current driven into the input node (independent of what drives it). */
