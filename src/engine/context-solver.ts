@@ -1,7 +1,6 @@
 // The one place the Context meets src/solve. Rules see only the Context; this file adapts the
 // solver's functions to what the Context offers, so a change in the solver's signatures is absorbed
 // here. Types are re-exported so rule files import them from the engine, not from the solver.
-//
 import type { Circuit, Part } from "../circuit/types.js";
 import type { SolverCircuit } from "../solve/netlist.js";
 import type { ComplexPoint } from "./context-types.js";
