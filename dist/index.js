@@ -31332,8 +31332,19 @@ function impedanceToGround(circuit, op, node, frequencies, opts = {}) {
     return { f, mag: Math.hypot(re, im), phaseDeg: phaseDeg(re, im), re, im };
   });
 }
+function impedanceBetween(circuit, op, a, b, frequencies, opts = {}) {
+  if (b === "0") return impedanceToGround(circuit, op, a, frequencies, opts);
+  const ac = acSweep(circuit, op, frequencies, { kind: "current", node: a, returnNode: b }, opts);
+  const zero = { re: new Float64Array(frequencies.length), im: new Float64Array(frequencies.length) };
+  const va = a === "0" ? zero : ac.nodeVoltages[a] ?? nanSeries(frequencies.length);
+  const vb = ac.nodeVoltages[b] ?? nanSeries(frequencies.length);
+  return frequencies.map((f, k) => {
+    const re = va.re[k] - vb.re[k], im = va.im[k] - vb.im[k];
+    return { f, mag: Math.hypot(re, im), phaseDeg: phaseDeg(re, im), re, im };
+  });
+}
 
-// src/engine/context-rails.ts
+// src/circuit/net-voltage.ts
 function localNetName(net) {
   const trimmed = net.endsWith("/") ? net.slice(0, -1) : net;
   const slash = trimmed.lastIndexOf("/");
@@ -31350,6 +31361,8 @@ function voltsFromNetName(net) {
   if (!Number.isFinite(magnitude)) return void 0;
   return sign === "-" ? -magnitude : magnitude;
 }
+
+// src/engine/context-rails.ts
 var SOURCE_KINDS2 = /* @__PURE__ */ new Set(["battery", "voltage-source"]);
 function sourceVolts(part) {
   const n = part.parsed.number;
@@ -32766,20 +32779,7 @@ function symbolName(libId) {
   const i = libId.indexOf(":");
   return i < 0 ? libId : libId.slice(i + 1);
 }
-function localName(net) {
-  const trimmed = net.endsWith("/") ? net.slice(0, -1) : net;
-  return trimmed.slice(trimmed.lastIndexOf("/") + 1);
-}
-function railVoltsFromName(net) {
-  const name = localName(net);
-  const m = /(?:^|[^0-9A-Za-z.])([+-]?)(\d+)(?:[.,](\d+))?V(\d+)?(?![0-9])/i.exec(name) ?? /^([+-]?)(\d+)(?:[.,](\d+))?V(\d+)?$/i.exec(name);
-  if (!m) return void 0;
-  const [, sign, whole, decimals, rkm] = m;
-  if (decimals !== void 0 && rkm !== void 0) return void 0;
-  const frac = decimals ?? rkm;
-  const v = Number(frac !== void 0 ? `${whole}.${frac}` : whole);
-  return sign === "-" ? -v : v;
-}
+var railVoltsFromName = voltsFromNetName;
 function isExcluded(part) {
   if (part.dnp || part.excludedFromSim) return true;
   const enable = field2(part, "Sim.Enable");
@@ -32957,7 +32957,7 @@ var Builder = class {
     this.opts = opts;
     const groundNames = new Set((opts.groundNames ?? []).map((n) => n.toLowerCase()));
     for (const net of circuit.nets) {
-      const ground = net.isGround || net.name === "0" || [net.name, localName(net.name), ...net.aliases].some((a) => groundNames.has(a.toLowerCase()));
+      const ground = net.isGround || net.name === "0" || [net.name, localNetName(net.name), ...net.aliases].some((a) => groundNames.has(a.toLowerCase()));
       this.nodeOfNet[net.name] = ground ? "0" : net.name;
     }
     this.ctx = { circuit, notes: this.notes, libraries: /* @__PURE__ */ new Map() };
@@ -33295,7 +33295,7 @@ var Builder = class {
       if (!net.isPower && configured === void 0) continue;
       const volts = configured ?? railCandidates(net).map(railVoltsFromName).find((v) => v !== void 0);
       if (volts === void 0) {
-        this.notes.push({ message: `power net ${net.name} has no known voltage: give it one under "rails" in the config, e.g. "rails": { "${localName(net.name)}": "9V" }` });
+        this.notes.push({ message: `power net ${net.name} has no known voltage: give it one under "rails" in the config, e.g. "rails": { "${localNetName(net.name)}": "9V" }` });
         continue;
       }
       const driver = this.sourceDriven.get(node);
@@ -33308,7 +33308,7 @@ var Builder = class {
   }
 };
 function railCandidates(net) {
-  return [.../* @__PURE__ */ new Set([net.name, localName(net.name), ...net.aliases])];
+  return [.../* @__PURE__ */ new Set([net.name, localNetName(net.name), ...net.aliases])];
 }
 function defaultBatteryResistance(part, volts) {
   const text = `${part.value} ${part.footprint} ${part.libId}`;
@@ -33374,25 +33374,15 @@ function toPoints(frequencies, re, im) {
     return { hertz, re: r, im: i, magnitude: Math.hypot(r, i) };
   });
 }
-function impedanceAt(solver, op, node, freqs, passiveOnly) {
-  const points = impedanceToGround(solver, op, node, freqs, { passiveOnly });
+function solvedPoints(points) {
   if (points.some((p) => !Number.isFinite(p.mag))) return void 0;
   return points.map((p) => ({ hertz: p.f, re: p.re, im: p.im, magnitude: p.mag }));
 }
+function impedanceAt(solver, op, node, freqs, passiveOnly) {
+  return solvedPoints(impedanceToGround(solver, op, node, freqs, { passiveOnly }));
+}
 function impedanceBetweenAt(solver, op, a, b, freqs, passiveOnly) {
-  if (passiveOnly) return void 0;
-  const probe2 = { kind: "I", name: "Iprobe_between", pos: b, neg: a, dc: 0, ac: 1 };
-  const circuit = { title: solver.title, elements: [...solver.elements, probe2] };
-  const ac = acSweep(circuit, op, freqs, { kind: "source", name: probe2.name });
-  if (ac.problem !== void 0) return void 0;
-  const zero = { re: new Float64Array(freqs.length), im: new Float64Array(freqs.length) };
-  const va = a === "0" ? zero : ac.nodeVoltages[a];
-  const vb = b === "0" ? zero : ac.nodeVoltages[b];
-  if (!va || !vb) return void 0;
-  const re = freqs.map((_, k) => (va.re[k] ?? Number.NaN) - (vb.re[k] ?? Number.NaN));
-  const im = freqs.map((_, k) => (va.im[k] ?? Number.NaN) - (vb.im[k] ?? Number.NaN));
-  const points = toPoints(freqs, re, im);
-  return points.some((p) => !Number.isFinite(p.magnitude)) ? void 0 : points;
+  return solvedPoints(impedanceBetween(solver, op, a, b, freqs, { passiveOnly }));
 }
 function transferAt(solver, op, input, output, freqs) {
   const ac = acSweep(solver, op, freqs, { kind: "current", node: input });
